@@ -1,0 +1,39 @@
+/**
+ * An ordered set of time slices, oldest first. Slice i covers top_ma < age <= base_ma
+ * (an age on a boundary belongs to the younger unit, whose base it is); an age of 0 belongs
+ * to the youngest slice.
+ */
+export interface TimeScale {
+  /** How the scale was chosen, as the user wrote it: `stages`, `equal:10`, a file name. */
+  readonly label: string;
+  readonly names: readonly string[];
+  /** Older boundary of each slice, Ma, decreasing with the index. */
+  readonly baseMa: Float64Array;
+  /** Younger boundary of each slice, Ma. */
+  readonly topMa: Float64Array;
+}
+
+/** How an occurrence with an age range is given to one slice. */
+export type AssignRule =
+  | { readonly kind: 'midpoint' }
+  | { readonly kind: 'within' }
+  | { readonly kind: 'overlap'; readonly fraction: number }
+  | { readonly kind: 'random'; readonly seed: number };
+
+/** Why an occurrence went to no slice; stored per row as a small code. */
+export const UNASSIGNED_REASONS = [
+  'assigned',
+  'age outside the time scale',
+  'age range spans more than one slice',
+  'no slice holds the required share of the age range',
+] as const;
+export type UnassignedReasonCode = 0 | 1 | 2 | 3;
+
+export interface SliceAssignment {
+  /** Slice index of each row, or -1 where none takes it. */
+  readonly slice: Int32Array;
+  /** Index into UNASSIGNED_REASONS for each row (0 where assigned). */
+  readonly reason: Uint8Array;
+  /** Age used for the row (the midpoint, or the random draw), Ma; NaN where unassigned. */
+  readonly age: Float64Array;
+}
