@@ -1,0 +1,97 @@
+/** Format marker and version of session files; bump the version when the shape changes. */
+export const SESSION_FORMAT = 'driftgrid-session';
+export const SESSION_FORMAT_VERSION = 1;
+
+/** An input file as the session recorded it. */
+export interface SessionInput {
+  /** Path relative to the session file's folder (absolute when on another drive). */
+  readonly path: string;
+  /** SHA-256 of the file's bytes, lower-case hex. */
+  readonly sha256: string;
+  readonly bytes: number;
+}
+
+/** Every setting that shapes the results; with the inputs, enough to reproduce every number. */
+export interface SessionSettings {
+  readonly bins: string;
+  readonly assign: string;
+  readonly seed: number;
+  readonly grid: string;
+  /** Explicit column choices, field → column header. */
+  readonly map: Readonly<Record<string, string>>;
+}
+
+export interface Session {
+  readonly format: typeof SESSION_FORMAT;
+  readonly formatVersion: number;
+  readonly tool: { readonly name: 'driftgrid'; readonly version: string };
+  readonly inputs: { readonly occurrences: SessionInput; readonly bins?: SessionInput };
+  readonly settings: SessionSettings;
+  /** What the run found, for the record; not read back. */
+  readonly summary: Readonly<Record<string, unknown>>;
+}
+
+/** Session file text: stable key order and 2-space indentation so that runs can be diffed. */
+export function sessionJson(session: Session): string {
+  return JSON.stringify(session, null, 2) + '\n';
+}
+
+/** Reads a session file, naming the first field that is missing or of the wrong kind. */
+export function parseSession(text: string, source: string): Session {
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (error) {
+    throw new Error(`${source}: not a session file (invalid JSON: ${(error as Error).message}).`);
+  }
+  const root = requireObject(value, source, 'the file');
+  if (root.format !== SESSION_FORMAT) throw new Error(`${source}: not a session file (field "format" should be "${SESSION_FORMAT}").`);
+  if (root.formatVersion !== SESSION_FORMAT_VERSION) {
+    throw new Error(`${source}: session format version ${String(root.formatVersion)} is not supported (expected ${SESSION_FORMAT_VERSION}).`);
+  }
+  const inputs = requireObject(root.inputs, source, 'inputs');
+  const settings = requireObject(root.settings, source, 'settings');
+  const map = requireObject(settings.map, source, 'settings.map');
+  for (const [field, column] of Object.entries(map)) requireString(column, source, `settings.map.${field}`);
+  return {
+    format: SESSION_FORMAT,
+    formatVersion: SESSION_FORMAT_VERSION,
+    tool: { name: 'driftgrid', version: requireString(requireObject(root.tool, source, 'tool').version, source, 'tool.version') },
+    inputs: {
+      occurrences: requireInput(inputs.occurrences, source, 'inputs.occurrences'),
+      ...(inputs.bins === undefined ? {} : { bins: requireInput(inputs.bins, source, 'inputs.bins') }),
+    },
+    settings: {
+      bins: requireString(settings.bins, source, 'settings.bins'),
+      assign: requireString(settings.assign, source, 'settings.assign'),
+      seed: requireNumber(settings.seed, source, 'settings.seed'),
+      grid: requireString(settings.grid, source, 'settings.grid'),
+      map: map as Record<string, string>,
+    },
+    summary: root.summary === undefined ? {} : requireObject(root.summary, source, 'summary'),
+  };
+}
+
+function requireInput(value: unknown, source: string, field: string): SessionInput {
+  const r = requireObject(value, source, field);
+  const sha256 = requireString(r.sha256, source, `${field}.sha256`);
+  if (!/^[0-9a-f]{64}$/.test(sha256)) throw new Error(`${source}: field "${field}.sha256" should be 64 lower-case hex digits.`);
+  return { path: requireString(r.path, source, `${field}.path`), sha256, bytes: requireNumber(r.bytes, source, `${field}.bytes`) };
+}
+
+function requireObject(value: unknown, source: string, field: string): Record<string, unknown> {
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    throw new Error(`${source}: field "${field}" should be an object.`);
+  }
+  return value as Record<string, unknown>;
+}
+
+function requireString(value: unknown, source: string, field: string): string {
+  if (typeof value !== 'string') throw new Error(`${source}: field "${field}" should be a string.`);
+  return value;
+}
+
+function requireNumber(value: unknown, source: string, field: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) throw new Error(`${source}: field "${field}" should be a number.`);
+  return value;
+}

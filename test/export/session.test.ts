@@ -1,0 +1,28 @@
+import { describe, expect, it } from 'vitest';
+import { parseSession, sessionJson, SESSION_FORMAT, SESSION_FORMAT_VERSION, type Session } from '../../src/export/session';
+
+const session: Session = {
+  format: SESSION_FORMAT,
+  formatVersion: SESSION_FORMAT_VERSION,
+  tool: { name: 'driftgrid', version: '0.1.0' },
+  inputs: { occurrences: { path: '../occ.csv', sha256: 'a'.repeat(64), bytes: 12 } },
+  settings: { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: { taxon: 'genus' } },
+  summary: { rowsRead: 3 },
+};
+
+describe('session files', () => {
+  it('read back what was written', () => {
+    expect(parseSession(sessionJson(session), 's.json')).toEqual(session);
+  });
+
+  it.each([
+    ['not JSON', '{', /invalid JSON/],
+    ['another kind of file', '{"format":"x"}', /field "format" should be "driftgrid-session"/],
+    ['a newer format', JSON.stringify({ ...session, formatVersion: 99 }), /version 99 is not supported/],
+    ['a bad digest', JSON.stringify({ ...session, inputs: { occurrences: { path: 'a', sha256: 'xyz', bytes: 1 } } }), /inputs\.occurrences\.sha256/],
+    ['a missing grid', JSON.stringify({ ...session, settings: { ...session.settings, grid: undefined } }), /settings\.grid" should be a string/],
+    ['a seed that is not a number', JSON.stringify({ ...session, settings: { ...session.settings, seed: 'one' } }), /settings\.seed" should be a number/],
+  ])('name the field at fault for %s', (_name, text, message) => {
+    expect(() => parseSession(text, 's.json')).toThrow(message);
+  });
+});
