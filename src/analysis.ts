@@ -75,8 +75,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
 
   const sliceCount = scale.names.length;
   const groups = groupBySlice(sliceOfRow, sliceCount);
-  const cellOfRow = new Uint32Array(table.count);
-  grid.cellsOf(palaeoLat, palaeoLon, cellOfRow);
+  const cellOfRow = cellsOfPlacedRows(grid, groups.order, palaeoLat, palaeoLon, table.count);
 
   const positions = positionCodes(palaeoLat, palaeoLon);
   const collectionsArePositions = table.collection.values.length === 0;
@@ -125,4 +124,19 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     exclusions: { rows: Uint32Array.from(excludedRows), reasons: Uint8Array.from(excludedReasons) },
     collectionsArePositions,
   };
+}
+
+/** Cell of every placed row (the rows in `order`); other rows keep 0 and are never read. */
+function cellsOfPlacedRows(grid: EqualAreaGrid, order: Uint32Array, lat: Float64Array, lon: Float64Array, rowCount: number): Uint32Array {
+  const placedLat = new Float64Array(order.length);
+  const placedLon = new Float64Array(order.length);
+  for (let k = 0; k < order.length; k++) {
+    placedLat[k] = lat[order[k]];
+    placedLon[k] = lon[order[k]];
+  }
+  const placedCells = new Uint32Array(order.length);
+  grid.cellsOf(placedLat, placedLon, placedCells);
+  const cellOfRow = new Uint32Array(rowCount);
+  for (let k = 0; k < order.length; k++) cellOfRow[order[k]] = placedCells[k];
+  return cellOfRow;
 }

@@ -1,20 +1,24 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import {
-  TableReadError, continuationPrefix, createOccurrenceReader, findInvalidUtf8, sniffBytes,
+  TableReadError, continuationPrefix, createCsvScanner, createOccurrenceReader, detach, findInvalidUtf8, recordFields, sniffBytes,
   type OccurrenceReadResult, type OccurrenceReaderOptions,
 } from '../table/index';
+import { binsFromRecords, type TimeScale } from '../time/index';
 
 /** Bytes read at a time. */
 export const READ_CHUNK_BYTES = 1 << 20;
 
-export interface ReadTableFileOptions extends OccurrenceReaderOptions {
+/** How a file is streamed. */
+export interface StreamOptions {
   /** Called after each chunk with the bytes read so far and the file size. */
   readonly onBytes?: (bytesRead: number, totalBytes: number) => void;
   readonly signal?: AbortSignal;
   /** Bytes per read (READ_CHUNK_BYTES by default); tests use small chunks. */
   readonly chunkBytes?: number;
 }
+
+export interface ReadTableFileOptions extends OccurrenceReaderOptions, StreamOptions {}
 
 /**
  * Reads an occurrence table from a file: opens it read-only, streams it in chunks, refuses
@@ -23,8 +27,62 @@ export interface ReadTableFileOptions extends OccurrenceReaderOptions {
  * Throws TableReadError for a file that cannot be read as a whole.
  */
 export async function readTableFile(path: string, options: ReadTableFileOptions): Promise<OccurrenceReadResult> {
-  const totalBytes = await stat(path).then((s) => s.size, (err: unknown) => { throw cannotOpen(path, err); });
   const reader = createOccurrenceReader(options);
+  await streamText(path, (text) => reader.push(text), options);
+  return reader.end();
+}
+
+/** The records of a small CSV/TSV file (bins, poles…) as strings; blank lines are counted, not kept. */
+export interface TextRecords {
+  readonly header: readonly string[];
+  readonly records: ReadonlyArray<{ readonly line: number; readonly fields: readonly string[] }>;
+  readonly blankLines: number;
+}
+
+/** Reads every record of a CSV/TSV file with the same checks as readTableFile (for small tables). */
+export async function readRecordsFile(path: string, options: StreamOptions = {}): Promise<TextRecords> {
+  let header: string[] | undefined;
+  const records: Array<{ line: number; fields: string[] }> = [];
+  let blankLines = 0;
+  const scanner = createCsvScanner({
+    onRecord: (r) => {
+      if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
+      if (r.count === 1 && r.end[0] === r.start[0] && r.raw.length === 0) blankLines++;
+      else if (header === undefined) header = recordFields(r);
+      else records.push({ line: r.line, fields: recordFields(r) });
+    },
+  });
+  await streamText(path, (text) => scanner.push(text), options);
+  scanner.end();
+  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
+  return { header, records, blankLines };
+}
+
+/** A user's bin table (`name, base_ma, top_ma`) read from a file; see binsFromRecords. */
+export async function readBinsFile(path: string): Promise<TimeScale> {
+  const { header, records } = await readRecordsFile(path);
+  return binsFromRecords(header, records, path);
+}
+
+/**
+ * The text of the records starting on the given lines, read again from the file (without their
+ * line endings), for reporting rows that a later step could not use.
+ */
+export async function readRawRecords(path: string, lines: ReadonlySet<number>): Promise<Map<number, string>> {
+  const found = new Map<number, string>();
+  const scanner = createCsvScanner({
+    onRecord: (r) => {
+      if (lines.has(r.line)) found.set(r.line, detach(r.raw));
+    },
+  });
+  await streamText(path, (text) => scanner.push(text), {});
+  scanner.end();
+  return found;
+}
+
+/** Streams a file's text, chunk by chunk, refusing what is not UTF-8 text. */
+async function streamText(path: string, push: (text: string) => void, options: StreamOptions): Promise<void> {
+  const totalBytes = await stat(path).then((s) => s.size, (err: unknown) => { throw cannotOpen(path, err); });
   const decoder = new TextDecoder('utf-8', { fatal: true });
   const stream = createReadStream(path, { flags: 'r', highWaterMark: options.chunkBytes ?? READ_CHUNK_BYTES, signal: options.signal });
   let offset = 0;
@@ -41,7 +99,7 @@ export async function readTableFile(path: string, options: ReadTableFileOptions)
       } catch {
         throw await invalidUtf8(path, previous, chunk, offset, false);
       }
-      reader.push(text);
+      push(text);
       offset += chunk.length;
       previous = chunk;
       options.onBytes?.(offset, totalBytes);
@@ -57,8 +115,7 @@ export async function readTableFile(path: string, options: ReadTableFileOptions)
   } catch {
     throw await invalidUtf8(path, previous, new Uint8Array(0), offset, true);
   }
-  reader.push(rest);
-  return reader.end();
+  push(rest);
 }
 
 function cannotOpen(path: string, err: unknown): TableReadError {

@@ -1,0 +1,23 @@
+export { ABSENT_CODE, NO_PLATE } from './occurrence-table';
+export type { CodedColumn, OccurrenceTable, RejectedRow } from './occurrence-table';
+export { TableReadError } from './table-read-error';
+export { DELIMITERS, detectDelimiter } from './delimiter-detection';
+export type { Delimiter } from './delimiter-detection';
+export { MAX_RECORD_CHARS, createCsvScanner } from './csv-scanner';
+export type { CsvScanner, CsvScannerOptions } from './csv-scanner';
+export { recordFields } from './scanned-record';
+export type { ScannedRecord } from './scanned-record';
+export { isTrimmable, trimmedEnd, trimmedStart } from './text-span';
+export { StringDictionary, detach } from './string-dictionary';
+export { SNIFF_BYTES, sniffBytes } from './sniff-bytes';
+export { continuationPrefix, findInvalidUtf8 } from './utf8-check';
+export { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, matchSynonym, normaliseHeader } from './column-synonyms';
+export type { ColumnIndex, OccurrenceField, SynonymMatch } from './column-synonyms';
+export { mapColumns } from './column-mapping';
+export type { ColumnMapping } from './column-mapping';
+export {
+  MAX_PLATE_ID, describeBadNumber, isBlank, parseDecimal, parseDecimalSpan, parsePlateId, parsePlateIdSpan,
+} from './number-field';
+export type { ResolveInterval } from './occurrence-row';
+export { createOccurrenceReader } from './occurrence-reader';
+export type { OccurrenceReader, OccurrenceReaderOptions, OccurrenceReadResult } from './occurrence-reader';

@@ -1,0 +1,43 @@
+// A seeded synthetic occurrence table for benchmarks: collections of a few occurrences that share
+// an age range and a palaeoposition (as real compilations do), ages over the Phanerozoic so that
+// the chart's stages give about 100 slices, sites clustered around a few hundred centres.
+import { createWriteStream, existsSync, renameSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { createSeededRandom } from '../../src/time';
+
+const FORMAT_VERSION = 1;
+const OLDEST_MA = 538;
+
+/** Path of the cached table with `rows` rows for `seed`, written on first use. */
+export async function syntheticTable(rows: number, seed = 7): Promise<string> {
+  const path = join(tmpdir(), `driftgrid-bench-${rows}-${seed}-v${FORMAT_VERSION}.csv`);
+  if (existsSync(path)) return path;
+  const random = createSeededRandom(seed);
+  const u = () => random.nextUniform();
+  const centres = Array.from({ length: 400 }, () => [Math.asin(2 * u() - 1) * (180 / Math.PI), 360 * u() - 180]);
+  const partial = `${path}.part`;
+  const out = createWriteStream(partial);
+  out.write('taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection,environment\n');
+  let written = 0;
+  let collection = 0;
+  while (written < rows) {
+    collection++;
+    const [clat, clon] = centres[Math.floor(u() * centres.length)];
+    const lat = Math.max(-90, Math.min(90, clat + (u() - 0.5) * 16));
+    const lon = ((clon + (u() - 0.5) * 24 + 540) % 360) - 180;
+    const maxMa = OLDEST_MA * u();
+    const minMa = Math.max(0, maxMa - 12 * u());
+    const size = 1 + Math.floor(u() * 12);
+    const env = u() < 0.7 ? 'marine' : '"terrestrial, fluvial"';
+    let chunk = '';
+    for (let k = 0; k < size && written < rows; k++, written++) {
+      const taxon = `Genus${Math.floor(u() * u() * 20000)}`;
+      chunk += `${taxon},${maxMa.toFixed(2)},${minMa.toFixed(2)},${lat.toFixed(4)},${lon.toFixed(4)},C${collection},${env}\n`;
+    }
+    if (!out.write(chunk)) await new Promise<void>((resolve) => out.once('drain', () => resolve()));
+  }
+  await new Promise<void>((resolve, reject) => out.end((error?: Error | null) => (error ? reject(error) : resolve())));
+  renameSync(partial, path);
+  return path;
+}

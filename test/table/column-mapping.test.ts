@@ -1,0 +1,102 @@
+import { describe, expect, it } from 'vitest';
+import { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, TableReadError, mapColumns, matchSynonym, normaliseHeader } from '../../src/table/index';
+
+function failure(header: string[], explicit?: Record<string, string>): string {
+  try {
+    mapColumns(header, explicit);
+  } catch (err) {
+    expect(err).toBeInstanceOf(TableReadError);
+    return (err as Error).message;
+  }
+  throw new Error('mapColumns accepted the header');
+}
+
+describe('the synonym table', () => {
+  it('lists each field under its own name first', () => {
+    for (const field of OCCURRENCE_FIELDS) expect(COLUMN_SYNONYMS[field][0]).toBe(field);
+  });
+
+  it('never gives one header name to two fields', () => {
+    const seen = new Map<string, string>();
+    for (const field of OCCURRENCE_FIELDS) {
+      for (const name of COLUMN_SYNONYMS[field]) {
+        const key = normaliseHeader(name);
+        expect(seen.get(key), `${name} is listed for ${seen.get(key)} and ${field}`).toBeUndefined();
+        seen.set(key, field);
+      }
+    }
+  });
+
+  it('matches names whatever their case and separators', () => {
+    expect(matchSynonym('Paleo Lat')?.field).toBe('palaeo_lat');
+    expect(matchSynonym('paleolatitude')?.field).toBe('palaeo_lat');
+    expect(matchSynonym('PALAEO-LONGITUDE')?.field).toBe('palaeo_lon');
+    expect(matchSynonym(' Max.Age ')?.field).toBe('max_ma');
+    expect(matchSynonym('age_min')?.field).toBe('min_ma');
+    expect(matchSynonym('lng')?.field).toBe('lon');
+    expect(matchSynonym('Plate ID')?.field).toBe('plate_id');
+    expect(matchSynonym('latitude (deg)')).toBeUndefined();
+  });
+});
+
+describe('mapColumns', () => {
+  it('maps a header by synonyms and lists the columns it does not use', () => {
+    const m = mapColumns(['Taxon Name', 'notes', 'Max Age', 'min_age', 'Latitude', 'Lng', 'plate', 'Locality']);
+    expect(m.index).toMatchObject({ taxon: 0, max_ma: 2, min_ma: 3, lat: 4, lon: 5, plate_id: 6, collection: 7, interval: -1, palaeo_lat: -1 });
+    expect(m.unused).toEqual([1]);
+    expect(m.how.taxon).toBe('synonym');
+  });
+
+  it('prefers a column bearing the field name over another synonym', () => {
+    const m = mapColumns(['genus', 'taxon', 'interval', 'lat', 'lon']);
+    expect(m.index.taxon).toBe(1);
+    expect(m.unused).toEqual([0]);
+  });
+
+  it('follows explicit field=column pairs before synonyms', () => {
+    const m = mapColumns(['name', 'Stufe', 'y', 'x', 'taxon'], { taxon: 'name', interval: 'Stufe', palaeo_lat: 'y', palaeo_lon: 'X' });
+    expect(m.index).toMatchObject({ taxon: 0, interval: 1, palaeo_lat: 2, palaeo_lon: 3 });
+    expect(m.how.taxon).toBe('explicit');
+    expect(m.unused).toEqual([4]);
+  });
+
+  it('refuses a duplicated column name that matters, naming both positions', () => {
+    expect(failure(['taxon', 'max_ma', 'min_ma', 'lat', 'lon', 'Lat'])).toMatch(
+      /^duplicate column name: column 4 \("lat"\) and column 6 \("Lat"\) both give lat; rename or remove one/,
+    );
+  });
+
+  it('ignores duplicated names of columns it does not use', () => {
+    expect(mapColumns(['taxon', 'note', 'interval', 'note', 'lat', 'lon']).unused).toEqual([1, 3]);
+  });
+
+  it('refuses two different synonyms for one field and says how to choose', () => {
+    expect(failure(['genus', 'species', 'interval', 'lat', 'lon'])).toMatch(
+      /column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>/,
+    );
+  });
+
+  it('lists the columns found and the names accepted for everything missing, all at once', () => {
+    const message = failure(['name', 'age', 'x', 'y']);
+    expect(message).toMatch(/no usable header/);
+    expect(message).toMatch(/columns found in the header \(line 1\): "name", "age", "x", "y"$/);
+    const missing = failure(['species', 'lat']);
+    expect(missing).toMatch(/no age columns: give max_ma and min_ma, or interval \(accepted names for max_ma: max_ma, max_age/);
+    expect(missing).toMatch(/a lat column but no lon column \(accepted names for lon: lon, lng, long, longitude/);
+    expect(missing).toMatch(/columns found in the header \(line 1\): "species", "lat"/);
+  });
+
+  it('requires a taxon, an age source and a position source', () => {
+    expect(failure(['max_ma', 'min_ma', 'lat', 'lon'])).toMatch(/^no taxon column \(accepted names for taxon: taxon, taxon_name/);
+    expect(failure(['taxon', 'max_ma', 'lat', 'lon'])).toMatch(/a max_ma column but no min_ma column/);
+    expect(failure(['taxon', 'interval', 'collection'])).toMatch(/no position columns: give palaeo_lat and palaeo_lon, or lat and lon/);
+    expect(mapColumns(['taxon', 'interval', 'palaeo_lat', 'palaeo_lon']).index.interval).toBe(1);
+  });
+
+  it('explains explicit pairs that do not fit', () => {
+    expect(failure(['a', 'b'], { taxa: 'a' })).toMatch(/mapping taxa=a: "taxa" is not a field; fields are taxon, max_ma/);
+    expect(failure(['a', 'b'], { taxon: 'c' })).toMatch(/mapping taxon=c: no column is named "c"/);
+    expect(failure(['a', 'b'], { taxon: 'a', group: 'a' })).toMatch(/mapping group=a: column 1 \("a"\) is already mapped/);
+    expect(failure(['a', 'a'], { taxon: 'a' })).toMatch(/mapping taxon=a: column 1 \("a"\) and column 2 \("a"\) both match; rename one/);
+  });
+});
