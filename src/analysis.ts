@@ -1,7 +1,6 @@
 import type { EqualAreaGrid } from './grid/equal-area-grid';
 import type { OccurrenceTable } from './table/occurrence-table';
 import type { AssignRule, TimeScale } from './time/time-scale';
-import { UNASSIGNED_REASONS } from './time/time-scale';
 import { assignSlices } from './time/assign-slices';
 import { DistinctCounter } from './footprint/distinct-counter';
 import { groupBySlice } from './footprint/group-by-slice';
@@ -34,9 +33,12 @@ export interface Exclusions {
   readonly reasons: Uint8Array;
 }
 
+/** Why an accepted row reached no slice; indices 0–2 follow UNASSIGNED_REASONS 1–3. */
 export const EXCLUSION_REASONS = [
-  ...UNASSIGNED_REASONS.slice(1),
-  'no palaeocoordinates, and present-day coordinates need a rotation model',
+  'age range reaches outside the time slices, or into a gap between them; expected an age within the chosen bins',
+  'age range spans more than one slice; the "within" rule needs it inside one slice',
+  'no slice holds the required share of the age range (the "overlap" rule)',
+  'no palaeo_lat/palaeo_lon, and present-day lat/lon can be placed only with a rotation model; expected palaeo_lat and palaeo_lon',
 ] as const;
 const NO_POSITION = EXCLUSION_REASONS.length - 1;
 

@@ -29,7 +29,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
   const grid = parseGridName(options.grid);
   const rule = parseAssignRule(options.assign, options.seed);
   const binsFile = BIN_KEYWORDS.test(options.bins) ? undefined : options.bins;
-  const scale: TimeScale = binsFile === undefined ? parseBinsOption(options.bins) : await readBinsFile(binsFile);
+  const userScale = binsFile === undefined ? undefined : await readBinsFile(binsFile);
 
   const digest = await fileDigest(input);
   const progress = progressReporter(digest.bytes, options.quiet);
@@ -37,9 +37,13 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
     mapping: options.map,
     resolveInterval: findChartInterval,
     onProgress: progress.rows,
+  }).catch((error: unknown) => {
+    throw new Error(`${input}: ${error instanceof Error ? error.message : String(error)}`);
   });
   progress.done();
 
+  // Equal bins reach back to the oldest age in the table; chart ranks are always whole.
+  const scale: TimeScale = userScale ?? parseBinsOption(options.bins, oldestAge(read.table));
   const result = analyse(read.table, { scale, rule, grid });
   const rejects = [...read.rejects, ...(await excludedRows(input, read.table, result))];
 
@@ -111,6 +115,13 @@ async function excludedRows(input: string, table: OccurrenceTable, result: Analy
   return Array.from(rows, (row, k) => {
     const reason = EXCLUSION_REASONS[reasons[k]];
     const line = table.line[row];
-    return { line, field: reason.startsWith('no palaeocoordinates') ? 'palaeo_lat' : 'age', reason, original: originals.get(line) ?? '' };
+    return { line, field: reasons[k] === EXCLUSION_REASONS.length - 1 ? 'palaeo_lat' : 'age', reason, original: originals.get(line) ?? '' };
   });
+}
+
+/** Oldest max_ma of the accepted rows (0 for an empty table). */
+function oldestAge(table: OccurrenceTable): number {
+  let oldest = 0;
+  for (let i = 0; i < table.count; i++) if (table.maxMa[i] > oldest) oldest = table.maxMa[i];
+  return oldest;
 }

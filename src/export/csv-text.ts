@@ -15,5 +15,11 @@ export function fixed(value: number, decimals: number): string {
   return text.startsWith('-') && Number(text) === 0 ? text.slice(1) : text;
 }
 
+/** Like `fixed`, without trailing zeros: ages read as the chart prints them (538.8, not 538.800000). */
+export function trimmed(value: number, decimals: number): string {
+  const text = fixed(value, decimals);
+  return text.includes('.') ? text.replace(/\.?0+$/, '') : text;
+}
+
 /** Decimals written for each kind of number (documented in the README's export contract). */
 export const DECIMALS = { degrees: 6, areaKm2: 1, lengthKm: 3, ageMa: 6 } as const;

@@ -1,5 +1,5 @@
 import type { SliceMetrics } from '../analysis';
-import { csvLine, DECIMALS, fixed } from './csv-text';
+import { csvLine, DECIMALS, fixed, trimmed } from './csv-text';
 
 export const SLICES_COLUMNS = [
   'slice', 'name', 'base_ma', 'top_ma', 'occurrences', 'collections', 'taxa', 'cells', 'hull_km2', 'mst_km',
@@ -12,7 +12,7 @@ export function slicesCsv(slices: readonly SliceMetrics[]): string {
   const deg = (v: number) => fixed(v, DECIMALS.degrees);
   slices.forEach((s, i) => {
     lines.push(csvLine([
-      String(i + 1), s.name, fixed(s.baseMa, DECIMALS.ageMa), fixed(s.topMa, DECIMALS.ageMa),
+      String(i + 1), s.name, trimmed(s.baseMa, DECIMALS.ageMa), trimmed(s.topMa, DECIMALS.ageMa),
       String(s.occurrences), String(s.collections), String(s.taxa), String(s.cells),
       fixed(s.hullKm2, DECIMALS.areaKm2), fixed(s.mstKm, DECIMALS.lengthKm),
       deg(s.latMin), deg(s.latMax), deg(s.latSpan), deg(s.centroidLat), deg(s.centroidLon),

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import Papa from 'papaparse';
-import { csvLine, fixed } from '../../src/export/csv-text';
+import { csvLine, fixed, trimmed } from '../../src/export/csv-text';
 
 describe('csvLine', () => {
   it('quotes only fields with a comma, quote or line break, doubling quotes (RFC 4180 §2.6–2.7)', () => {
@@ -24,5 +24,15 @@ describe('fixed', () => {
     expect(fixed(NaN, 3)).toBe('');
     expect(fixed(-0.0000001, 3)).toBe('0.000');
     expect(fixed(-2.5, 1)).toBe('-2.5');
+  });
+});
+
+describe('trimmed', () => {
+  it('drops trailing zeros and a bare decimal point, keeping whole numbers whole', () => {
+    expect(trimmed(538.8, 6)).toBe('538.8');
+    expect(trimmed(66, 6)).toBe('66');
+    expect(trimmed(100, 0)).toBe('100');
+    expect(trimmed(0.0000004, 6)).toBe('0');
+    expect(trimmed(251.902, 6)).toBe('251.902');
   });
 });

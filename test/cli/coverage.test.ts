@@ -1,0 +1,159 @@
+import { execFileSync, spawnSync } from 'node:child_process';
+import { copyFileSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { beforeAll, describe, expect, it } from 'vitest';
+import Papa from 'papaparse';
+import geodesic from 'geographiclib-geodesic';
+import { runCli } from './run-cli';
+
+const R_M = 6371008.8;
+/** geographiclib on a sphere of the IUGG mean radius (flattening 0): an outside reference. */
+const sphere = new geodesic.Geodesic.Geodesic(R_M, 0);
+const tempDir = (label: string) => mkdtempSync(join(tmpdir(), `driftgrid-${label}-`));
+const readCsv = (path: string) => Papa.parse<Record<string, string>>(readFileSync(path, 'utf8'), { header: true, skipEmptyLines: true }).data;
+
+describe('driftgrid coverage on a small hand-made table', () => {
+  // With --bins equal:10 the bins reach back to the oldest age (18 Ma): 20–10 and 10–0 Ma.
+  // Slice 20–10 Ma holds a triangle of sites (0°,0°), (0°,10°E), (10°N,0°); slice 10–0 Ma one
+  // site twice.
+  const table = [
+    'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection',
+    'Alpha,16,14,0,0,c1',
+    'Beta,16,14,0,0,c1',
+    'Alpha,18,12,0,10,c2',
+    'Gamma,11,11,10,0,c3',
+    'Delta,5,3,-20,40,c4',
+    'Delta,9,1,-20,40,c4',
+  ].join('\n');
+  let out: string;
+  let input: string;
+
+  beforeAll(async () => {
+    const dir = tempDir('small');
+    input = join(dir, 'small.csv');
+    writeFileSync(input, table);
+    out = join(dir, 'results');
+    const run = await runCli('coverage', input, '--bins', 'equal:10', '--grid', 'healpix:4', '--out', out, '--quiet');
+    expect(run.stderr).toBe('');
+    expect(run.status).toBe(0);
+  });
+
+  it('writes slices.csv with the contract columns, oldest first, counts worked by hand', () => {
+    const text = readFileSync(join(out, 'slices.csv'), 'utf8');
+    expect(text.split('\n')[0]).toBe('slice,name,base_ma,top_ma,occurrences,collections,taxa,cells,hull_km2,mst_km,lat_min,lat_max,lat_span,centroid_lat,centroid_lon');
+    const rows = readCsv(join(out, 'slices.csv'));
+    expect(rows.map((r) => Number(r.base_ma))).toEqual([20, 10]);
+    const [older, younger] = rows;
+    expect([older.occurrences, older.collections, older.taxa, older.lat_min, older.lat_max]).toEqual(['4', '3', '3', '0.000000', '10.000000']);
+    expect([younger.occurrences, younger.collections, younger.taxa, younger.cells, younger.hull_km2, younger.mst_km]).toEqual(['2', '1', '1', '1', '', '0.000']);
+  });
+
+  it('measures the triangle hull area and the spanning tree as geographiclib does on the same sphere', () => {
+    const older = readCsv(join(out, 'slices.csv'))[0];
+    const polygon = sphere.Polygon(false);
+    for (const [lat, lon] of [[0, 0], [0, 10], [10, 0]]) polygon.AddPoint(lat, lon);
+    const area = Math.abs(polygon.Compute(false, true).area ?? NaN) / 1e6;
+    expect(Number(older.hull_km2)).toBeCloseTo(area, 0);
+    // MST of the triangle: the two 10° sides meeting at (0°, 0°).
+    const side = (lat2: number, lon2: number) => (sphere.Inverse(0, 0, lat2, lon2).s12 ?? NaN) / 1000;
+    expect(Number(older.mst_km)).toBeCloseTo(side(0, 10) + side(10, 0), 2);
+  });
+
+  it('writes one cells.csv row per occupied (slice, cell) whose counts add up to the slice', () => {
+    const cells = readCsv(join(out, 'cells.csv'));
+    expect(cells.every((c) => c.grid === 'healpix:4')).toBe(true);
+    const slices = readCsv(join(out, 'slices.csv'));
+    slices.forEach((s, i) => {
+      const mine = cells.filter((c) => Number(c.slice) === i + 1);
+      expect(mine.length).toBe(Number(s.cells));
+      expect(mine.reduce((sum, c) => sum + Number(c.occurrences), 0)).toBe(Number(s.occurrences));
+    });
+  });
+
+  it('writes cells.geojson as an RFC 7946 FeatureCollection matching cells.csv', () => {
+    const geojson = JSON.parse(readFileSync(join(out, 'cells.geojson'), 'utf8')) as GeoJSON.FeatureCollection;
+    const cells = readCsv(join(out, 'cells.csv'));
+    expect(geojson.type).toBe('FeatureCollection');
+    expect(geojson.features.map((f) => String(f.properties?.cell))).toEqual(cells.map((c) => c.cell));
+  });
+
+  it('records every setting and the SHA-256 of the input in session.json, and a rerun reproduces the CSVs byte for byte', async () => {
+    const session = JSON.parse(readFileSync(join(out, 'session.json'), 'utf8'));
+    expect(session.settings).toEqual({ bins: 'equal:10', assign: 'midpoint', seed: 1, grid: 'healpix:4', map: {} });
+    const sha = execFileSync('sha256sum', [input], { encoding: 'utf8' }).split(' ')[0];
+    expect(session.inputs.occurrences.sha256).toBe(sha);
+    const again = join(out, '..', 'again');
+    expect((await runCli('coverage', '--session', join(out, 'session.json'), '--out', again, '--quiet')).status).toBe(0);
+    for (const name of ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv']) {
+      expect(readFileSync(join(again, name), 'utf8')).toBe(readFileSync(join(out, name), 'utf8'));
+    }
+  });
+
+  it('refuses to rerun a session whose input has changed since', async () => {
+    const dir = tempDir('changed');
+    const copy = join(dir, 'table.csv');
+    copyFileSync(input, copy);
+    await runCli('coverage', copy, '--bins', 'equal:10', '--out', join(dir, 'r'), '--quiet');
+    writeFileSync(copy, table + '\nEpsilon,5,3,1,1,c9');
+    const run = await runCli('coverage', '--session', join(dir, 'r', 'session.json'), '--out', join(dir, 'again'));
+    expect(run.status).toBe(1);
+    expect(run.stderr).toMatch(/has changed since the session was recorded/);
+  });
+});
+
+describe('driftgrid coverage safeguards', () => {
+  it('never writes over an input file, even when --out is its folder', async () => {
+    const dir = tempDir('overwrite');
+    const input = join(dir, 'slices.csv');
+    const text = 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nAlpha,10,5,1,1\n';
+    writeFileSync(input, text);
+    const run = await runCli('coverage', input, '--out', dir);
+    expect(run.status).toBe(1);
+    expect(run.stderr).toMatch(/Refusing to write .*slices\.csv: it is one of the input files/);
+    expect(readFileSync(input, 'utf8')).toBe(text);
+  });
+
+  it('counts distinct positions as collections when the table names none, and says so', async () => {
+    const dir = tempDir('nocollections');
+    const input = join(dir, 't.csv');
+    writeFileSync(input, 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nA,10,5,1,1\nB,10,5,1,1\nC,10,5,2,2\n');
+    const run = await runCli('coverage', input, '--bins', 'equal:10', '--out', join(dir, 'r'));
+    expect(run.stdout).toMatch(/names no collections: "collections" counts distinct positions/);
+    expect(readCsv(join(dir, 'r', 'slices.csv'))[0].collections).toBe('2');
+  });
+
+  it('gives the same results for --assign random with the same seed, and different ones with another', async () => {
+    const dir = tempDir('random');
+    const input = join(dir, 't.csv');
+    const rows = Array.from({ length: 200 }, (_, i) => `T${i % 17},${40 + (i % 7)},${(i * 7) % 30},${(i % 50) - 25},${(i * 13) % 300 - 150}`);
+    writeFileSync(input, ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon', ...rows].join('\n'));
+    const runWith = async (seed: string, name: string) => {
+      await runCli('coverage', input, '--bins', 'equal:5', '--assign', 'random', '--seed', seed, '--out', join(dir, name), '--quiet');
+      return readFileSync(join(dir, name, 'slices.csv'), 'utf8');
+    };
+    const first = await runWith('42', 'a');
+    expect(await runWith('42', 'b')).toBe(first);
+    expect(await runWith('43', 'c')).not.toBe(first);
+  });
+});
+
+describe('the built command', () => {
+  beforeAll(() => {
+    execFileSync(process.execPath, ['scripts/build-cli.mjs']);
+  });
+
+  it('exits with status 1 and a one-line message, no stack trace, on a file it cannot read', () => {
+    const child = spawnSync(process.execPath, ['bin/driftgrid.js', 'coverage', 'test/fixtures/bad/binary-garbage.bin', '--out', tempDir('spawn')], { encoding: 'utf8' });
+    expect(child.status).toBe(1);
+    expect(child.stderr).toMatch(/^driftgrid: test\/fixtures\/bad\/binary-garbage\.bin: file looks binary/);
+    expect(child.stderr).not.toMatch(/\n\s+at /);
+  });
+
+  it('runs the demo scenario and prints a summary', () => {
+    const child = spawnSync(process.execPath, ['bin/driftgrid.js', 'coverage', 'assets/demo/occurrences.csv', '--out', tempDir('demo')], { encoding: 'utf8' });
+    expect(child.status).toBe(0);
+    expect(child.stdout).toMatch(/rows read: 49,906; accepted: 49,906; rejected: 0/);
+    expect(child.stdout).toMatch(/elapsed: \d+\.\d\d s/);
+  });
+});
