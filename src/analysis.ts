@@ -6,6 +6,7 @@ import { DistinctCounter } from './footprint/distinct-counter';
 import { groupBySlice } from './footprint/group-by-slice';
 import { positionCodes } from './footprint/position-codes';
 import { tallyCells, type CellTallies } from './footprint/cell-tallies';
+import { gather } from './footprint/gather';
 import { measureFootprint, type Footprint } from './footprint/slice-footprint';
 
 export interface AnalysisSettings {
@@ -59,7 +60,7 @@ export interface AnalysisResult {
 export function analyse(table: OccurrenceTable, settings: AnalysisSettings): AnalysisResult {
   const { scale, rule, grid } = settings;
   const assignment = assignSlices(table.maxMa, table.minMa, scale, rule);
-  const sliceOfRow = Int32Array.from(assignment.slice);
+  const sliceOfRow = assignment.slice; // fresh from assignSlices: ours to mark exclusions in
   const { palaeoLat, palaeoLon } = table;
 
   const excludedRows: number[] = [];
@@ -76,44 +77,56 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
   }
 
   const sliceCount = scale.names.length;
-  const groups = groupBySlice(sliceOfRow, sliceCount);
-  const cellOfRow = cellsOfPlacedRows(grid, groups.order, palaeoLat, palaeoLon, table.count);
-
+  const { order, start } = groupBySlice(sliceOfRow, sliceCount);
   const positions = positionCodes(palaeoLat, palaeoLon);
   const collectionsArePositions = table.collection.values.length === 0;
   const collectionCodes = collectionsArePositions ? positions.codes : table.collection.codes;
+
+  // Every column the slices need, gathered into slice order once (see gather.ts).
+  const lat = gather(palaeoLat, order);
+  const lon = gather(palaeoLon, order);
+  const rows = {
+    start,
+    cell: new Uint32Array(order.length),
+    collection: gather(collectionCodes, order),
+    taxon: gather(table.taxon.codes, order),
+  };
+  grid.cellsOf(lat, lon, rows.cell);
+  const position = gather(positions.codes, order);
+
   const collectionCounter = new DistinctCounter(collectionsArePositions ? positions.count : table.collection.values.length);
   const taxonCounter = new DistinctCounter(table.taxon.values.length);
-  const cells = tallyCells(groups, cellOfRow, collectionCodes, table.taxon.codes, collectionCounter, taxonCounter);
-
   const positionCounter = new DistinctCounter(positions.count);
-  const firstRows = new Uint32Array(groups.order.length);
+  const cells = tallyCells(rows, collectionCounter, taxonCounter);
+
+  const inOrder = identityOrder(order.length);
+  const firstRows = new Uint32Array(order.length);
   const slices: SliceMetrics[] = [];
   let cellEntry = 0;
   for (let s = 0; s < sliceCount; s++) {
-    const from = groups.start[s];
-    const to = groups.start[s + 1];
+    const from = start[s];
+    const to = start[s + 1];
     let occupied = 0;
     while (cellEntry < cells.count && cells.slice[cellEntry] === s) {
       occupied++;
       cellEntry++;
     }
-    const distinct = positionCounter.firstRowsInto(positions.codes, groups.order, from, to, firstRows);
-    const lat = new Float64Array(distinct);
-    const lon = new Float64Array(distinct);
+    const distinct = positionCounter.firstRowsInto(position, inOrder, from, to, firstRows);
+    const distinctLat = new Float64Array(distinct);
+    const distinctLon = new Float64Array(distinct);
     for (let k = 0; k < distinct; k++) {
-      lat[k] = palaeoLat[firstRows[k]];
-      lon[k] = palaeoLon[firstRows[k]];
+      distinctLat[k] = lat[firstRows[k]];
+      distinctLon[k] = lon[firstRows[k]];
     }
     slices.push({
       name: scale.names[s],
       baseMa: scale.baseMa[s],
       topMa: scale.topMa[s],
       occurrences: to - from,
-      collections: collectionCounter.count(collectionCodes, groups.order, from, to),
-      taxa: taxonCounter.count(table.taxon.codes, groups.order, from, to),
+      collections: collectionCounter.count(rows.collection, inOrder, from, to),
+      taxa: taxonCounter.count(rows.taxon, inOrder, from, to),
       cells: occupied,
-      ...measureFootprint(lat, lon),
+      ...measureFootprint(distinctLat, distinctLon),
     });
   }
 
@@ -128,17 +141,8 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
   };
 }
 
-/** Cell of every placed row (the rows in `order`); other rows keep 0 and are never read. */
-function cellsOfPlacedRows(grid: EqualAreaGrid, order: Uint32Array, lat: Float64Array, lon: Float64Array, rowCount: number): Uint32Array {
-  const placedLat = new Float64Array(order.length);
-  const placedLon = new Float64Array(order.length);
-  for (let k = 0; k < order.length; k++) {
-    placedLat[k] = lat[order[k]];
-    placedLon[k] = lon[order[k]];
-  }
-  const placedCells = new Uint32Array(order.length);
-  grid.cellsOf(placedLat, placedLon, placedCells);
-  const cellOfRow = new Uint32Array(rowCount);
-  for (let k = 0; k < order.length; k++) cellOfRow[order[k]] = placedCells[k];
-  return cellOfRow;
+function identityOrder(length: number): Uint32Array {
+  const order = new Uint32Array(length);
+  for (let k = 0; k < length; k++) order[k] = k;
+  return order;
 }

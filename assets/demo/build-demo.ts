@@ -6,8 +6,8 @@ import { buildLandmass, type Landmass } from './landmasses';
 import { landName } from './names';
 import { streamFor } from './random';
 import { poleTableRows } from './plate-motion';
-import { rotationModel, type RotationModel } from './rotation-table';
-import { poleTableCsv } from './pole-table-csv';
+import type { RotationModel } from '../../src/rotation';
+import { poleTableCsv, poleTableModel } from './pole-table-csv';
 import { landGeoJson } from './land-geojson';
 import { makeClades, makeGenera } from './taxa';
 import { windowCollections, type Collection } from './collections';
@@ -39,8 +39,8 @@ function allCollections(lands: readonly Landmass[], model: RotationModel, seed: 
 
 export function buildDemo(seed = DEMO_SEED): Record<DemoFileName, string> {
   const lands = buildLandmasses(seed);
-  const poleRows = poleTableRows(PLATES);
-  const model = rotationModel(poleRows);
+  const poles = poleTableCsv(poleTableRows(PLATES));
+  const model = poleTableModel(poles);
   const biota = streamFor(seed, STREAM.biota);
   const clades = makeClades(biota);
   const genera = makeGenera(biota, clades, lands.map((l) => l.plateId));
@@ -51,7 +51,7 @@ export function buildDemo(seed = DEMO_SEED): Record<DemoFileName, string> {
   const csv = (header: string, lines: readonly string[]) => `${header}\n${lines.join('\n')}\n`;
   return {
     'land.geojson': landGeoJson(lands),
-    'poles.csv': poleTableCsv(poleRows),
+    'poles.csv': poles,
     'occurrences.csv': csv(OCCURRENCE_HEADER, occurrences),
     'occurrences-with-problems.csv': csv(OCCURRENCE_HEADER, problemLines(occurrences)),
     'indicators.csv': csv(INDICATOR_HEADER, indicators),

@@ -9,7 +9,7 @@ import { midpoint, reportedRange, type AgeRange } from './age-ranges';
 import { palaeoPositionInto } from './reconstruct';
 import { uniform, type Rng } from './random';
 import { REALMS, type Realm } from './taxa';
-import type { RotationModel } from './rotation-table';
+import type { RotationModel } from '../../src/rotation';
 import type { SamplingWindow } from './sampling-plan';
 import { stageRunSpan } from './stages';
 

@@ -11,7 +11,7 @@ import { formatAge, formatPosition } from './csv-format';
 import { latOfVector } from './spherical';
 import { uniform, weightedIndex, type Rng } from './random';
 import { SCENARIO_BASE_MA, SCENARIO_TOP_MA } from './stages';
-import type { RotationModel } from './rotation-table';
+import type { RotationModel } from '../../src/rotation';
 
 export const INDICATOR_HEADER = 'kind,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id';
 const INDICATOR_KINDS = ['coal', 'evaporite', 'glacial', 'bauxite', 'laterite', 'reef'] as const;

@@ -1,36 +1,50 @@
 import type { CellTallies } from '../footprint/cell-tallies';
 import type { EqualAreaGrid } from '../grid/equal-area-grid';
+import { AsciiWriter } from './ascii-writer';
 import { fixed, DECIMALS } from './csv-text';
 import { splitAtAntimeridian } from './split-antimeridian';
 
 /** Longest step, in degrees, between vertices of an exported cell outline. */
 export const CELL_EDGE_STEP_DEG = 1;
 
+const piece = AsciiWriter.encode;
+
 /**
  * `cells.geojson`: an RFC 7946 FeatureCollection with one Polygon (or MultiPolygon where the cell
- * crosses the antimeridian) per occupied (slice, cell), carrying the cells.csv columns as properties.
- * Written as text with each cell's geometry formatted once, however many slices occupy it.
+ * crosses the antimeridian) per occupied (slice, cell), carrying the cells.csv columns as
+ * properties. Written as ASCII bytes; each cell's fields and geometry are formatted once, however
+ * many slices occupy it.
  */
-export function cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): string {
-  const geometries = new Map<number, string>();
+export function cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Uint8Array {
+  const perCell = new Map<number, { head: Uint8Array; tail: Uint8Array }>();
   const centre = new Float64Array(2);
-  const parts: string[] = ['{"type":"FeatureCollection","features":[\n'];
+  const gridName = JSON.stringify(grid.name);
+  const featureStart = piece('{"type":"Feature","properties":{"slice":');
+  const occurrences = piece(',"occurrences":');
+  const collections = piece(',"collections":');
+  const taxa = piece(',"taxa":');
+  const separator = piece(',\n');
+  const out = new AsciiWriter(cells.count * 512);
+  out.bytes(piece('{"type":"FeatureCollection","features":[\n'));
   for (let k = 0; k < cells.count; k++) {
     const cell = cells.cell[k];
-    let geometry = geometries.get(cell);
-    if (geometry === undefined) {
-      geometry = cellGeometry(grid, cell);
-      geometries.set(cell, geometry);
+    let shared = perCell.get(cell);
+    if (shared === undefined) {
+      grid.cellCentreInto(cell, centre);
+      shared = {
+        head: piece(`,"grid":${gridName},"cell":${cell},"cell_lat":${fixed(centre[0], DECIMALS.degrees)},"cell_lon":${fixed(centre[1], DECIMALS.degrees)}`),
+        tail: piece(`},"geometry":${cellGeometry(grid, cell)}}`),
+      };
+      perCell.set(cell, shared);
     }
-    grid.cellCentreInto(cell, centre);
-    const properties =
-      `{"slice":${cells.slice[k] + 1},"grid":${JSON.stringify(grid.name)},"cell":${cell},` +
-      `"cell_lat":${fixed(centre[0], DECIMALS.degrees)},"cell_lon":${fixed(centre[1], DECIMALS.degrees)},` +
-      `"occurrences":${cells.occurrences[k]},"collections":${cells.collections[k]},"taxa":${cells.taxa[k]}}`;
-    parts.push(`${k > 0 ? ',\n' : ''}{"type":"Feature","properties":${properties},"geometry":${geometry}}`);
+    if (k > 0) out.bytes(separator);
+    out.bytes(featureStart).unsigned(cells.slice[k] + 1).bytes(shared.head);
+    out.bytes(occurrences).unsigned(cells.occurrences[k]);
+    out.bytes(collections).unsigned(cells.collections[k]);
+    out.bytes(taxa).unsigned(cells.taxa[k]);
+    out.bytes(shared.tail);
   }
-  parts.push('\n]}\n');
-  return parts.join('');
+  return out.bytes(piece('\n]}\n')).result();
 }
 
 function cellGeometry(grid: EqualAreaGrid, cell: number): string {

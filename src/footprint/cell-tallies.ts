@@ -1,5 +1,4 @@
 import type { DistinctCounter } from './distinct-counter';
-import type { SliceGroups } from './group-by-slice';
 
 /** One entry per occupied (slice, cell), ordered by slice then cell; columnar. */
 export interface CellTallies {
@@ -11,24 +10,25 @@ export interface CellTallies {
   readonly taxa: Uint32Array;
 }
 
+/** Columns of the placed rows in slice order: rows of slice s are start[s] … start[s + 1] − 1. */
+export interface SliceOrderedRows {
+  readonly start: Uint32Array;
+  readonly cell: Uint32Array;
+  readonly collection: Uint32Array;
+  readonly taxon: Uint32Array;
+}
+
 /** Row positions within one slice must fit beside the cell number in a float64 sort key (cell < 2^30). */
 const ROW_BITS = 2 ** 23;
 
 /**
  * Tallies occurrences, distinct collections and distinct taxa per occupied cell of every slice.
- * Within a slice the rows are sorted by (cell, file order) through one numeric key, so the result
+ * Within a slice the rows are sorted by (cell, position) through one numeric key, so the result
  * does not depend on hashing.
  */
-export function tallyCells(
-  groups: SliceGroups,
-  cellOfRow: Uint32Array,
-  collectionCodes: Uint32Array,
-  taxonCodes: Uint32Array,
-  collections: DistinctCounter,
-  taxa: DistinctCounter,
-): CellTallies {
-  const { order, start } = groups;
-  const total = order.length;
+export function tallyCells(rows: SliceOrderedRows, collections: DistinctCounter, taxa: DistinctCounter): CellTallies {
+  const { start, cell: cellOf } = rows;
+  const total = cellOf.length;
   const out = {
     slice: new Uint32Array(total),
     cell: new Uint32Array(total),
@@ -46,19 +46,22 @@ export function tallyCells(
     const from = start[s];
     const n = start[s + 1] - from;
     const sliceKeys = keys.subarray(0, n);
-    for (let k = 0; k < n; k++) sliceKeys[k] = cellOfRow[order[from + k]] * ROW_BITS + k;
+    for (let k = 0; k < n; k++) sliceKeys[k] = cellOf[from + k] * ROW_BITS + k;
     sliceKeys.sort();
-    for (let k = 0; k < n; k++) sorted[k] = order[from + (sliceKeys[k] % ROW_BITS)];
+    for (let k = 0; k < n; k++) {
+      const key = sliceKeys[k];
+      sorted[k] = from + (key - Math.floor(key / ROW_BITS) * ROW_BITS);
+    }
     let runStart = 0;
     while (runStart < n) {
-      const cell = cellOfRow[sorted[runStart]];
+      const cell = cellOf[sorted[runStart]];
       let runEnd = runStart + 1;
-      while (runEnd < n && cellOfRow[sorted[runEnd]] === cell) runEnd++;
+      while (runEnd < n && cellOf[sorted[runEnd]] === cell) runEnd++;
       out.slice[count] = s;
       out.cell[count] = cell;
       out.occurrences[count] = runEnd - runStart;
-      out.collections[count] = collections.count(collectionCodes, sorted, runStart, runEnd);
-      out.taxa[count] = taxa.count(taxonCodes, sorted, runStart, runEnd);
+      out.collections[count] = collections.count(rows.collection, sorted, runStart, runEnd);
+      out.taxa[count] = taxa.count(rows.taxon, sorted, runStart, runEnd);
       count++;
       runStart = runEnd;
     }

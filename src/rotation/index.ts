@@ -1,1 +1,20 @@
-export * from './quaternion';
+export {
+  axisAngleFromQuaternionInto, conjugateQuaternionInto, createQuaternion, identityInto, multiplyQuaternionsInto,
+  normalizeQuaternionInto, poleFromQuaternion, quaternionFromAxisAngleInto, quaternionFromPole, rotateVectorInto,
+  slerpQuaternionsInto,
+} from './quaternion';
+export type { Quaternion, RotationPole } from './quaternion';
+export { rotationMatrixFromQuaternionInto } from './rotation-matrix';
+export { POLE_TABLE_COLUMNS, poleTableFromRecords } from './pole-table';
+export type { PoleRecord, PoleTable } from './pole-table';
+export { MAX_LISTED_PROBLEMS, PoleTableError, describePoleTableProblem } from './pole-table-error';
+export type { PoleTableProblem } from './pole-table-error';
+export { BEYOND_MODEL, RotationModel, createRotationModel } from './rotation-model';
+export type { BeyondModel, RotationModelOptions } from './rotation-model';
+export { RotationLookupError } from './rotation-lookup-error';
+export { ROTATION_STATUS, describeRotationStatus } from './rotation-status';
+export type { RotationStatus } from './rotation-status';
+export { reconstructPoints, reconstructPointsInto } from './reconstruct-points';
+export type { PresentDayPoints, ReconstructedPoints } from './reconstruct-points';
+export { DEFAULT_MAX_STEP_DEG, reconstructGeometry } from './reconstruct-geometry';
+export type { GeometryReconstructionOptions } from './reconstruct-geometry';

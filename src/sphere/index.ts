@@ -1,0 +1,13 @@
+export { EARTH_RADIUS_KM, DEGREES, RADIANS } from './earth';
+export {
+  degreesToUnitVectors, degreesToUnitVectorsInto, writeUnitVector, unitVectorsToDegrees, unitVectorsToDegreesInto,
+} from './unit-vectors';
+export { centralAngle, unitVectorAngle, greatCircleDistanceKm, greatCircleDistancesKmInto } from './distance';
+export { canonicalLatitude, canonicalLongitude, samePosition } from './position-identity';
+export { distinctPositions, type Positions } from './distinct-positions';
+export { convexHull, HULL_NONE_REASONS, GREAT_CIRCLE_TOLERANCE, type ConvexHull, type HullNoneReason } from './convex-hull';
+export { smallestEnclosingCap, OPEN_HEMISPHERE_MARGIN } from './smallest-enclosing-cap';
+export { polygonAreaSr, polygonAreaKm2 } from './polygon-area';
+export { minimumSpanningTree, type SpanningTree } from './minimum-spanning-tree';
+export { latitudeStats, type LatitudeStats } from './latitude-stats';
+export { sphericalCentroid, CENTROID_UNDEFINED_BELOW, type SphericalCentroid } from './spherical-centroid';
