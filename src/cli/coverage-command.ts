@@ -1,4 +1,5 @@
-import { readFile } from 'node:fs/promises';
+import { createHash } from 'node:crypto';
+import { readFile, stat } from 'node:fs/promises';
 import { dirname, isAbsolute, relative, resolve } from 'node:path';
 import { analyse, EXCLUSION_REASONS, type AnalysisResult } from '../analysis';
 import { cellsCsv } from '../export/cells-csv';
@@ -31,16 +32,22 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
   const binsFile = BIN_KEYWORDS.test(options.bins) ? undefined : options.bins;
   const userScale = binsFile === undefined ? undefined : await readBinsFile(binsFile);
 
-  const digest = await fileDigest(input);
-  const progress = progressReporter(digest.bytes, options.quiet);
+  const hash = createHash('sha256');
+  let bytesRead = 0;
+  const progress = progressReporter(await fileSize(input), options.quiet);
   const read = await readTableFile(input, {
     mapping: options.map,
     resolveInterval: findChartInterval,
     onProgress: progress.rows,
+    onChunk: (bytes) => {
+      hash.update(bytes);
+      bytesRead += bytes.length;
+    },
   }).catch((error: unknown) => {
     throw new Error(`${input}: ${error instanceof Error ? error.message : String(error)}`);
   });
   progress.done();
+  const digest = { sha256: hash.digest('hex'), bytes: bytesRead };
 
   // Equal bins reach back to the oldest age in the table; chart ranks are always whole.
   const scale: TimeScale = userScale ?? parseBinsOption(options.bins, oldestAge(read.table));
@@ -124,4 +131,9 @@ function oldestAge(table: OccurrenceTable): number {
   let oldest = 0;
   for (let i = 0; i < table.count; i++) if (table.maxMa[i] > oldest) oldest = table.maxMa[i];
   return oldest;
+}
+
+/** Size in bytes, or 0 when the file cannot be read (the reader then says why). */
+function fileSize(path: string): Promise<number> {
+  return stat(path).then((s) => s.size, () => 0);
 }

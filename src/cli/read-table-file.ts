@@ -13,6 +13,8 @@ export const READ_CHUNK_BYTES = 1 << 20;
 export interface StreamOptions {
   /** Called after each chunk with the bytes read so far and the file size. */
   readonly onBytes?: (bytesRead: number, totalBytes: number) => void;
+  /** Sees every chunk of raw bytes as read (to hash the file in the same pass). */
+  readonly onChunk?: (bytes: Uint8Array) => void;
   readonly signal?: AbortSignal;
   /** Bytes per read (READ_CHUNK_BYTES by default); tests use small chunks. */
   readonly chunkBytes?: number;
@@ -93,6 +95,7 @@ async function streamText(path: string, push: (text: string) => void, options: S
         const problem = sniffBytes(chunk);
         if (problem !== undefined) throw new TableReadError(problem);
       }
+      options.onChunk?.(chunk);
       let text: string;
       try {
         text = decoder.decode(chunk, { stream: true });

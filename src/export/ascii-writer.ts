@@ -3,6 +3,9 @@
  * 60 MB GeoJSON file as millions of small strings spent most of its time in the garbage collector;
  * bytes copied into one growing buffer do not.
  */
+const SHORT_PIECE = 48;
+const MAX_DIGITS = 16;
+
 export class AsciiWriter {
   private buffer: Uint8Array;
   private length = 0;
@@ -23,22 +26,30 @@ export class AsciiWriter {
   }
 
   bytes(piece: Uint8Array): this {
-    this.reserve(piece.length);
-    this.buffer.set(piece, this.length);
-    this.length += piece.length;
+    const n = piece.length;
+    this.reserve(n);
+    const buffer = this.buffer;
+    const at = this.length;
+    // TypedArray.set costs more than a short loop for the many small pieces.
+    if (n > SHORT_PIECE) buffer.set(piece, at);
+    else for (let i = 0; i < n; i++) buffer[at + i] = piece[i];
+    this.length = at + n;
     return this;
   }
 
   /** A whole number 0 … 2^53 in decimal. */
   unsigned(value: number): this {
-    this.reserve(16);
-    const start = this.length;
+    this.reserve(MAX_DIGITS);
+    const buffer = this.buffer;
+    let digits = 1;
+    for (let v = value; v >= 10; v = Math.floor(v / 10)) digits++;
+    let at = this.length + digits;
+    this.length = at;
     let v = value;
     do {
-      this.buffer[this.length++] = 48 + (v % 10);
+      buffer[--at] = 48 + (v % 10);
       v = Math.floor(v / 10);
     } while (v > 0);
-    this.buffer.subarray(start, this.length).reverse();
     return this;
   }
 

@@ -1,5 +1,5 @@
+import { centralAngle } from '../sphere/distance';
 import { RADIANS } from '../sphere/earth';
-import { centralAngle } from './central-angle';
 import { nestedFace, nestedX, nestedY } from './healpix-nested';
 import { healpixFacePointInto, isFacePole } from './healpix-projection';
 
@@ -56,7 +56,7 @@ function appendEdge(
       lon[i] = point[1];
     }
     let longest = 0;
-    for (let i = 0; i < n; i++) longest = Math.max(longest, centralAngle(lat[i], lon[i], lat[i + 1], lon[i + 1]));
+    for (let i = 0; i < n; i++) longest = Math.max(longest, centralAngle(lat[i] * RADIANS, lon[i] * RADIANS, lat[i + 1] * RADIANS, lon[i + 1] * RADIANS));
     if (longest <= maxStepRad) break;
     n = Math.max(n + 1, Math.ceil((n * longest) / maxStepRad));
   }

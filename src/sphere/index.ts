@@ -4,7 +4,6 @@ export {
 } from './unit-vectors';
 export { centralAngle, unitVectorAngle, greatCircleDistanceKm, greatCircleDistancesKmInto } from './distance';
 export { canonicalLatitude, canonicalLongitude, samePosition } from './position-identity';
-export { distinctPositions, type Positions } from './distinct-positions';
 export { convexHull, HULL_NONE_REASONS, GREAT_CIRCLE_TOLERANCE, type ConvexHull, type HullNoneReason } from './convex-hull';
 export { smallestEnclosingCap, OPEN_HEMISPHERE_MARGIN } from './smallest-enclosing-cap';
 export { polygonAreaSr, polygonAreaKm2 } from './polygon-area';

@@ -4,7 +4,7 @@
 import { report, time } from './measure';
 import { minimumSpanningTree } from '../../src/sphere/minimum-spanning-tree';
 import { convexHull } from '../../src/sphere/convex-hull';
-import { distinctPositions } from '../../src/sphere/distinct-positions';
+import { positionCodes } from '../../src/footprint/position-codes';
 import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { EARTH_RADIUS_KM } from '../../src/sphere/earth';
 
@@ -108,10 +108,10 @@ export async function run(): Promise<void> {
     million.lon[i] = Math.round(million.lon[i]);
   }
   report(
-    time('distinctPositions, 1,000,000 rows on a 1° lattice', () => distinctPositions(million.lat, million.lon, rows), 10, 2),
+    time('positionCodes, 1,000,000 rows on a 1° lattice', () => positionCodes(million.lat, million.lon), 10, 2),
     time('reference: Map of text keys, same', () => distinctByText(million.lat, million.lon, rows), 3, 1),
     '< 100 ms',
   );
   const spread = positions(5, 1_000_000);
-  report(time('distinctPositions, 1,000,000 rows all distinct', () => distinctPositions(spread.lat, spread.lon, rows), 10, 2), undefined, '< 100 ms');
+  report(time('positionCodes, 1,000,000 rows all distinct', () => positionCodes(spread.lat, spread.lon), 10, 2), undefined, '< 100 ms');
 }
