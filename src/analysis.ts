@@ -8,11 +8,19 @@ import { positionCodes } from './footprint/position-codes';
 import { tallyCells, type CellTallies } from './footprint/cell-tallies';
 import { gather } from './footprint/gather';
 import { measureFootprint, type Footprint } from './footprint/slice-footprint';
+import { DEFAULT_PLACEMENT, placeOccurrences, type Placement, type PlacementSettings } from './placement/place-occurrences';
+import { collectExclusions, type Exclusions } from './placement/exclusions';
+import type { RotationModel } from './rotation/rotation-model';
 
 export interface AnalysisSettings {
   readonly scale: TimeScale;
   readonly rule: AssignRule;
   readonly grid: EqualAreaGrid;
+  /** Rotation model for rows with present-day lat/lon + plate_id; without it only the table's
+   * palaeocoordinates place rows. */
+  readonly rotation?: RotationModel;
+  /** How rows are placed (see placeOccurrences); DEFAULT_PLACEMENT when absent. */
+  readonly placement?: PlacementSettings;
 }
 
 /** Per-slice results, one entry per slice of the scale, oldest first. */
@@ -27,21 +35,8 @@ export interface SliceMetrics extends Footprint {
   readonly cells: number;
 }
 
-/** Rows that reached no slice or no position, with the reason (never dropped silently). */
-export interface Exclusions {
-  readonly rows: Uint32Array;
-  /** Index into EXCLUSION_REASONS for each excluded row. */
-  readonly reasons: Uint8Array;
-}
-
-/** Why an accepted row reached no slice; indices 0–2 follow UNASSIGNED_REASONS 1–3. */
-export const EXCLUSION_REASONS = [
-  'age range reaches outside the time slices, or into a gap between them; expected an age within the chosen bins',
-  'age range spans more than one slice; the "within" rule needs it inside one slice',
-  'no slice holds the required share of the age range (the "overlap" rule)',
-  'no palaeo_lat/palaeo_lon, and present-day lat/lon can be placed only with a rotation model; expected palaeo_lat and palaeo_lon',
-] as const;
-const NO_POSITION = EXCLUSION_REASONS.length - 1;
+export { EXCLUSION_FIELDS, EXCLUSION_REASONS, exclusionStatus } from './placement/exclusions';
+export type { Exclusions } from './placement/exclusions';
 
 export interface AnalysisResult {
   readonly slices: readonly SliceMetrics[];
@@ -51,6 +46,8 @@ export interface AnalysisResult {
   /** Palaeoposition used for each row, degrees (NaN where excluded). */
   readonly palaeoLat: Float64Array;
   readonly palaeoLon: Float64Array;
+  /** Where each row's palaeoposition came from, or why it has none. */
+  readonly placement: Placement;
   readonly exclusions: Exclusions;
   /** True when `collections` counts distinct positions because the table has no collection ids. */
   readonly collectionsArePositions: boolean;
@@ -60,21 +57,11 @@ export interface AnalysisResult {
 export function analyse(table: OccurrenceTable, settings: AnalysisSettings): AnalysisResult {
   const { scale, rule, grid } = settings;
   const assignment = assignSlices(table.maxMa, table.minMa, scale, rule);
+  const placement = placeOccurrences(table, assignment, scale, settings.rotation, settings.placement ?? DEFAULT_PLACEMENT);
   const sliceOfRow = assignment.slice; // fresh from assignSlices: ours to mark exclusions in
-  const { palaeoLat, palaeoLon } = table;
+  const { lat: palaeoLat, lon: palaeoLon } = placement;
 
-  const excludedRows: number[] = [];
-  const excludedReasons: number[] = [];
-  for (let i = 0; i < table.count; i++) {
-    if (sliceOfRow[i] < 0) {
-      excludedRows.push(i);
-      excludedReasons.push(assignment.reason[i] - 1);
-    } else if (Number.isNaN(palaeoLat[i]) || Number.isNaN(palaeoLon[i])) {
-      sliceOfRow[i] = -1;
-      excludedRows.push(i);
-      excludedReasons.push(NO_POSITION);
-    }
-  }
+  const exclusions = collectExclusions(assignment, placement, sliceOfRow);
 
   const sliceCount = scale.names.length;
   const { order, start } = groupBySlice(sliceOfRow, sliceCount);
@@ -136,7 +123,8 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     sliceOfRow,
     palaeoLat,
     palaeoLon,
-    exclusions: { rows: Uint32Array.from(excludedRows), reasons: Uint8Array.from(excludedReasons) },
+    placement,
+    exclusions,
     collectionsArePositions,
   };
 }

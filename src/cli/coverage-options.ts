@@ -1,4 +1,7 @@
 import { parseArgs } from 'node:util';
+import { ROTATE_AT, type RotateAt } from '../placement';
+import { BEYOND_MODEL, type BeyondModel } from '../rotation';
+import { parseBeyondModel, parseMap, parseRotateAt, parseSeed } from './option-values';
 
 export interface CoverageOptions {
   readonly input: string | undefined;
@@ -7,15 +10,24 @@ export interface CoverageOptions {
   readonly seed: number;
   readonly grid: string;
   readonly map: Record<string, string>;
+  /** Pole table of the rotation model. */
+  readonly rotation: string | undefined;
+  readonly rotateAt: RotateAt;
+  readonly preferModel: boolean;
+  readonly beyondModel: BeyondModel;
   readonly out: string;
   readonly session: string | undefined;
   readonly quiet: boolean;
 }
 
-export const COVERAGE_DEFAULTS = { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', out: 'results' } as const;
+export const COVERAGE_DEFAULTS = {
+  bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', out: 'results', rotateAt: ROTATE_AT.slice, beyondModel: BEYOND_MODEL.reject,
+} as const;
 
 /** Options that a session file fixes; giving them beside --session would be ambiguous. */
-const SESSION_FIXED = ['bins', 'assign', 'seed', 'grid', 'map'] as const;
+const SESSION_FIXED = ['bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rotate-at', 'prefer-model', 'beyond-model'] as const;
+/** Options that only mean something with a rotation model. */
+const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
 
 export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
   let parsed;
@@ -30,6 +42,10 @@ export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
         seed: { type: 'string' },
         grid: { type: 'string' },
         map: { type: 'string', multiple: true },
+        rotation: { type: 'string' },
+        'rotate-at': { type: 'string' },
+        'prefer-model': { type: 'boolean' },
+        'beyond-model': { type: 'string' },
         out: { type: 'string' },
         session: { type: 'string' },
         quiet: { type: 'boolean' },
@@ -47,6 +63,9 @@ export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
     }
   } else if (positionals.length === 0) {
     throw new Error('coverage needs an occurrence table: driftgrid coverage <occurrences.csv> [options]. See `driftgrid --help`.');
+  } else if (values.rotation === undefined) {
+    const orphans = NEED_ROTATION.filter((name) => values[name] !== undefined);
+    if (orphans.length > 0) throw new Error(`${orphans.map((n) => `--${n}`).join(', ')} need${orphans.length === 1 ? 's' : ''} a rotation model: add --rotation <poles.csv>.`);
   }
   return {
     input: positionals[0],
@@ -55,28 +74,12 @@ export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
     seed: values.seed === undefined ? COVERAGE_DEFAULTS.seed : parseSeed(values.seed),
     grid: values.grid ?? COVERAGE_DEFAULTS.grid,
     map: parseMap(values.map ?? []),
+    rotation: values.rotation,
+    rotateAt: values['rotate-at'] === undefined ? COVERAGE_DEFAULTS.rotateAt : parseRotateAt(values['rotate-at']),
+    preferModel: values['prefer-model'] ?? false,
+    beyondModel: values['beyond-model'] === undefined ? COVERAGE_DEFAULTS.beyondModel : parseBeyondModel(values['beyond-model']),
     out: values.out ?? COVERAGE_DEFAULTS.out,
     session: values.session,
     quiet: values.quiet ?? false,
   };
-}
-
-function parseSeed(text: string): number {
-  const seed = Number(text);
-  if (!Number.isInteger(seed) || seed < 0 || seed > 0xffffffff) {
-    throw new Error(`--seed "${text}": expected a whole number from 0 to 4294967295.`);
-  }
-  return seed;
-}
-
-function parseMap(pairs: readonly string[]): Record<string, string> {
-  const map: Record<string, string> = {};
-  for (const pair of pairs) {
-    const at = pair.indexOf('=');
-    if (at <= 0 || at === pair.length - 1) throw new Error(`--map "${pair}": expected field=column, e.g. --map taxon=genus_name.`);
-    const field = pair.slice(0, at).trim();
-    if (field in map) throw new Error(`--map names the field "${field}" twice.`);
-    map[field] = pair.slice(at + 1);
-  }
-  return map;
 }

@@ -2,7 +2,7 @@ import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import {
   TableReadError, continuationPrefix, createCsvScanner, createOccurrenceReader, detach, findInvalidUtf8, recordFields, sniffBytes,
-  type OccurrenceReadResult, type OccurrenceReaderOptions,
+  type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
 
@@ -72,14 +72,22 @@ export async function readBinsFile(path: string): Promise<TimeScale> {
  */
 export async function readRawRecords(path: string, lines: ReadonlySet<number>): Promise<Map<number, string>> {
   const found = new Map<number, string>();
-  const scanner = createCsvScanner({
-    onRecord: (r) => {
-      if (lines.has(r.line)) found.set(r.line, detach(r.raw));
-    },
+  await scanRecordsFile(path, (r) => {
+    if (lines.has(r.line)) found.set(r.line, detach(r.raw));
   });
-  await streamText(path, (text) => scanner.push(text), {});
-  scanner.end();
   return found;
+}
+
+/**
+ * Streams every record of a file (header and blank lines included) through `onRecord`, with the
+ * checks of readTableFile; `delimiter` fixes the delimiter (else the header line decides).
+ */
+export async function scanRecordsFile(
+  path: string, onRecord: (record: ScannedRecord) => void, options: StreamOptions & { readonly delimiter?: Delimiter } = {},
+): Promise<void> {
+  const scanner = createCsvScanner({ onRecord, delimiter: options.delimiter });
+  await streamText(path, (text) => scanner.push(text), options);
+  scanner.end();
 }
 
 /** Streams a file's text, chunk by chunk, refusing what is not UTF-8 text. */

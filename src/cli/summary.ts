@@ -1,4 +1,5 @@
-import { EXCLUSION_REASONS, type AnalysisResult } from '../analysis';
+import { EXCLUSION_REASONS, exclusionStatus, type AnalysisResult } from '../analysis';
+import type { RotationModel } from '../rotation';
 import type { RejectedRow } from '../table/occurrence-table';
 
 export interface RunSummary {
@@ -6,20 +7,24 @@ export interface RunSummary {
   readonly accepted: number;
   readonly rejects: readonly RejectedRow[];
   readonly result: AnalysisResult;
+  readonly model: RotationModel | undefined;
   readonly written: readonly string[];
   readonly elapsedMs: number;
 }
 
+const n = (value: number) => value.toLocaleString('en');
+
 /** The few lines a user reads after a run: what went in, what was left out and why, where files went. */
 export function printSummary(summary: RunSummary): void {
   const { result } = summary;
-  const n = (value: number) => value.toLocaleString('en');
   const out: string[] = [];
   out.push(`rows read: ${n(summary.rowsRead)}; accepted: ${n(summary.accepted)}; rejected: ${n(summary.rejects.length)}`);
   for (const [field, count] of countBy(summary.rejects.map((r) => r.field))) out.push(`  rejected for ${field}: ${n(count)}`);
-  for (const [reason, count] of countBy(Array.from(result.exclusions.reasons, (r) => EXCLUSION_REASONS[r]))) {
+  const reasons = Array.from(result.exclusions.reasons);
+  for (const [reason, count] of countBy(reasons.filter((r) => exclusionStatus(r) === undefined).map((r) => EXCLUSION_REASONS[r]))) {
     out.push(`  not in any slice, ${reason}: ${n(count)}`);
   }
+  out.push(...placementLines(result, summary.model));
   const occupied = result.slices.filter((s) => s.occurrences > 0).length;
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);
   const noHull = result.slices.filter((s) => s.occurrences > 0 && s.hullNote !== undefined);
@@ -30,7 +35,23 @@ export function printSummary(summary: RunSummary): void {
   process.stdout.write(out.join('\n') + '\n');
 }
 
-function countBy(keys: readonly string[]): Array<[string, number]> {
+/** Rows placed from the table and by the model (clamped among them), and those that could not be. */
+function placementLines(result: AnalysisResult, model: RotationModel | undefined): string[] {
+  const { fromTable, fromModel, clamped } = result.placement;
+  const byModel = model === undefined ? '' : `; by the rotation model ${model.source}: ${n(fromModel)}${clamped > 0 ? ` (${n(clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`;
+  const lines = [`placed from the table's palaeocoordinates: ${n(fromTable)}${byModel}`];
+  const unplaced = Array.from(result.exclusions.reasons).filter((r) => exclusionStatus(r) !== undefined);
+  for (const [reason, count] of countBy(unplaced.map((r) => EXCLUSION_REASONS[r]))) lines.push(`  not placed, ${reason}: ${n(count)}`);
+  if (model !== undefined) lines.push(...modelNotes(model));
+  return lines;
+}
+
+/** What the rotation model accepted but should be told (unused columns, repeated rows). */
+export function modelNotes(model: RotationModel): string[] {
+  return model.notes.map((note) => `  rotation model note: ${note}`);
+}
+
+export function countBy(keys: readonly string[]): Array<[string, number]> {
   const counts = new Map<string, number>();
   for (const key of keys) counts.set(key, (counts.get(key) ?? 0) + 1);
   return [...counts.entries()].sort((a, b) => b[1] - a[1]);

@@ -1,6 +1,10 @@
 /** Format marker and version of session files; bump the version when the shape changes. */
 export const SESSION_FORMAT = 'driftgrid-session';
-export const SESSION_FORMAT_VERSION = 1;
+/** 2 added the rotation model (inputs.rotation, settings.rotateAt/preferModel/beyondModel); an
+ * older tool must refuse such a file rather than rerun it without the model. */
+export const SESSION_FORMAT_VERSION = 2;
+/** Versions this tool reads: a version 1 file is a run without a rotation model. */
+const READABLE_VERSIONS: readonly number[] = [1, 2];
 
 /** An input file as the session recorded it. */
 export interface SessionInput {
@@ -19,13 +23,18 @@ export interface SessionSettings {
   readonly grid: string;
   /** Explicit column choices, field → column header. */
   readonly map: Readonly<Record<string, string>>;
+  /** `slice` or `occurrence` (format 2; a version 1 file means the defaults). */
+  readonly rotateAt?: string;
+  readonly preferModel?: boolean;
+  /** `reject` or `clamp`. */
+  readonly beyondModel?: string;
 }
 
 export interface Session {
   readonly format: typeof SESSION_FORMAT;
   readonly formatVersion: number;
   readonly tool: { readonly name: 'driftgrid'; readonly version: string };
-  readonly inputs: { readonly occurrences: SessionInput; readonly bins?: SessionInput };
+  readonly inputs: { readonly occurrences: SessionInput; readonly bins?: SessionInput; readonly rotation?: SessionInput };
   readonly settings: SessionSettings;
   /** What the run found, for the record; not read back. */
   readonly summary: Readonly<Record<string, unknown>>;
@@ -46,8 +55,8 @@ export function parseSession(text: string, source: string): Session {
   }
   const root = requireObject(value, source, 'the file');
   if (root.format !== SESSION_FORMAT) throw new Error(`${source}: not a session file (field "format" should be "${SESSION_FORMAT}").`);
-  if (root.formatVersion !== SESSION_FORMAT_VERSION) {
-    throw new Error(`${source}: session format version ${String(root.formatVersion)} is not supported (expected ${SESSION_FORMAT_VERSION}).`);
+  if (typeof root.formatVersion !== 'number' || !READABLE_VERSIONS.includes(root.formatVersion)) {
+    throw new Error(`${source}: session format version ${String(root.formatVersion)} is not supported (expected ${READABLE_VERSIONS.join(' or ')}).`);
   }
   const inputs = requireObject(root.inputs, source, 'inputs');
   const settings = requireObject(root.settings, source, 'settings');
@@ -55,11 +64,12 @@ export function parseSession(text: string, source: string): Session {
   for (const [field, column] of Object.entries(map)) requireString(column, source, `settings.map.${field}`);
   return {
     format: SESSION_FORMAT,
-    formatVersion: SESSION_FORMAT_VERSION,
+    formatVersion: root.formatVersion,
     tool: { name: 'driftgrid', version: requireString(requireObject(root.tool, source, 'tool').version, source, 'tool.version') },
     inputs: {
       occurrences: requireInput(inputs.occurrences, source, 'inputs.occurrences'),
       ...(inputs.bins === undefined ? {} : { bins: requireInput(inputs.bins, source, 'inputs.bins') }),
+      ...(inputs.rotation === undefined ? {} : { rotation: requireInput(inputs.rotation, source, 'inputs.rotation') }),
     },
     settings: {
       bins: requireString(settings.bins, source, 'settings.bins'),
@@ -67,6 +77,9 @@ export function parseSession(text: string, source: string): Session {
       seed: requireNumber(settings.seed, source, 'settings.seed'),
       grid: requireString(settings.grid, source, 'settings.grid'),
       map: map as Record<string, string>,
+      ...(settings.rotateAt === undefined ? {} : { rotateAt: requireString(settings.rotateAt, source, 'settings.rotateAt') }),
+      ...(settings.preferModel === undefined ? {} : { preferModel: requireBoolean(settings.preferModel, source, 'settings.preferModel') }),
+      ...(settings.beyondModel === undefined ? {} : { beyondModel: requireString(settings.beyondModel, source, 'settings.beyondModel') }),
     },
     summary: root.summary === undefined ? {} : requireObject(root.summary, source, 'summary'),
   };
@@ -93,5 +106,10 @@ function requireString(value: unknown, source: string, field: string): string {
 
 function requireNumber(value: unknown, source: string, field: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) throw new Error(`${source}: field "${field}" should be a number.`);
+  return value;
+}
+
+function requireBoolean(value: unknown, source: string, field: string): boolean {
+  if (typeof value !== 'boolean') throw new Error(`${source}: field "${field}" should be true or false.`);
   return value;
 }

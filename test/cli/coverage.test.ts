@@ -80,7 +80,9 @@ describe('driftgrid coverage on a small hand-made table', () => {
 
   it('records every setting and the SHA-256 of the input in session.json, and a rerun reproduces the CSVs byte for byte', async () => {
     const session = JSON.parse(readFileSync(join(out, 'session.json'), 'utf8'));
-    expect(session.settings).toEqual({ bins: 'equal:10', assign: 'midpoint', seed: 1, grid: 'healpix:4', map: {} });
+    expect(session.settings).toEqual({
+      bins: 'equal:10', assign: 'midpoint', seed: 1, grid: 'healpix:4', map: {}, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
+    });
     const sha = execFileSync('sha256sum', [input], { encoding: 'utf8' }).split(' ')[0];
     expect(session.inputs.occurrences.sha256).toBe(sha);
     const again = join(out, '..', 'again');

@@ -1,0 +1,43 @@
+import { stat } from 'node:fs/promises';
+import type { RotationModel } from '../rotation';
+import { parseBinsOption } from '../time';
+import type { TimeScale } from '../time/time-scale';
+import { BIN_KEYWORDS } from './coverage-command';
+import { readRotationFile } from './read-rotation-file';
+import { readBinsFile } from './read-table-file';
+import { RECONSTRUCT_INPUT, parseReconstructOptions, type ReconstructOptions } from './reconstruct-options';
+import { reconstructGeoJson } from './reconstruct-geojson';
+import { reconstructTable } from './reconstruct-table';
+
+/** What both kinds of input need besides the options. */
+export interface ReconstructContext {
+  readonly options: ReconstructOptions;
+  readonly model: RotationModel;
+  /** The slices for an oldest age (equal bins reach back to it; chart ranks and bin files ignore it). */
+  readonly scaleFor: (oldestMa: number) => TimeScale;
+  /** Every file read, which no output may replace. */
+  readonly inputs: readonly string[];
+  readonly started: number;
+}
+
+/** `driftgrid reconstruct`: a table or base polygons carried back to each slice's age. */
+export async function runReconstruct(args: readonly string[]): Promise<number> {
+  const started = performance.now();
+  const options = parseReconstructOptions(args);
+  await stat(options.input).catch((error: unknown) => {
+    throw new Error(`${options.input}: cannot read it: ${error instanceof Error ? error.message : String(error)}`);
+  });
+  const binsFile = BIN_KEYWORDS.test(options.bins) ? undefined : options.bins;
+  const userScale = binsFile === undefined ? undefined : await readBinsFile(binsFile);
+  const model = await readRotationFile(options.rotation, options.beyondModel);
+  const context: ReconstructContext = {
+    options,
+    model,
+    scaleFor: (oldestMa) => userScale ?? parseBinsOption(options.bins, oldestMa),
+    inputs: [options.input, options.rotation, ...(binsFile === undefined ? [] : [binsFile])],
+    started,
+  };
+  if (options.kind === RECONSTRUCT_INPUT.geojson) await reconstructGeoJson(context);
+  else await reconstructTable(context);
+  return 0;
+}

@@ -1,0 +1,83 @@
+import { extname } from 'node:path';
+import { parseArgs } from 'node:util';
+import type { RotateAt } from '../placement';
+import type { BeyondModel } from '../rotation';
+import { COVERAGE_DEFAULTS } from './coverage-options';
+import { parseBeyondModel, parseMap, parseRotateAt, parseSeed } from './option-values';
+
+/** What reconstruct reads: an occurrence (or site) table, or GeoJSON polygons. */
+export const RECONSTRUCT_INPUT = { table: 'table', geojson: 'geojson' } as const;
+export type ReconstructInput = (typeof RECONSTRUCT_INPUT)[keyof typeof RECONSTRUCT_INPUT];
+
+export interface ReconstructOptions {
+  readonly input: string;
+  readonly kind: ReconstructInput;
+  readonly rotation: string;
+  readonly bins: string;
+  readonly assign: string;
+  readonly seed: number;
+  readonly map: Record<string, string>;
+  readonly rotateAt: RotateAt;
+  readonly beyondModel: BeyondModel;
+  readonly singleFile: boolean;
+  readonly out: string;
+  readonly quiet: boolean;
+}
+
+const GEOJSON_EXTENSIONS = ['.geojson', '.json'];
+/** Options about rows of a table, meaningless for polygons (reconstructed at each slice's mid-age). */
+const TABLE_ONLY = ['assign', 'seed', 'map', 'rotate-at'] as const;
+
+export function parseReconstructOptions(args: readonly string[]): ReconstructOptions {
+  let parsed;
+  try {
+    parsed = parseArgs({
+      args: [...args],
+      allowPositionals: true,
+      strict: true,
+      options: {
+        rotation: { type: 'string' },
+        bins: { type: 'string' },
+        assign: { type: 'string' },
+        seed: { type: 'string' },
+        map: { type: 'string', multiple: true },
+        'rotate-at': { type: 'string' },
+        'beyond-model': { type: 'string' },
+        'single-file': { type: 'boolean' },
+        out: { type: 'string' },
+        quiet: { type: 'boolean' },
+      },
+    });
+  } catch (error) {
+    throw new Error(`${(error as Error).message}. See \`driftgrid --help\`.`);
+  }
+  const { values, positionals } = parsed;
+  if (positionals.length !== 1) {
+    throw new Error(`reconstruct takes one input, a table or a GeoJSON file; got ${positionals.length === 0 ? 'none' : positionals.join(', ')}. See \`driftgrid --help\`.`);
+  }
+  const input = positionals[0];
+  if (values.rotation === undefined) throw new Error('reconstruct needs a rotation model: add --rotation <poles.csv>.');
+  const kind = GEOJSON_EXTENSIONS.includes(extname(input).toLowerCase()) ? RECONSTRUCT_INPUT.geojson : RECONSTRUCT_INPUT.table;
+  if (kind === RECONSTRUCT_INPUT.geojson) {
+    const tableOnly = TABLE_ONLY.filter((name) => values[name] !== undefined);
+    if (tableOnly.length > 0) {
+      throw new Error(`${tableOnly.map((n) => `--${n}`).join(', ')} appl${tableOnly.length === 1 ? 'ies' : 'y'} to tables; ${input} is GeoJSON, whose polygons are reconstructed at each slice's mid-age.`);
+    }
+  } else if (values['single-file'] !== undefined) {
+    throw new Error(`--single-file applies to GeoJSON input; ${input} is read as a table (GeoJSON files end in .geojson or .json).`);
+  }
+  return {
+    input,
+    kind,
+    rotation: values.rotation,
+    bins: values.bins ?? COVERAGE_DEFAULTS.bins,
+    assign: values.assign ?? COVERAGE_DEFAULTS.assign,
+    seed: values.seed === undefined ? COVERAGE_DEFAULTS.seed : parseSeed(values.seed),
+    map: parseMap(values.map ?? []),
+    rotateAt: values['rotate-at'] === undefined ? COVERAGE_DEFAULTS.rotateAt : parseRotateAt(values['rotate-at']),
+    beyondModel: values['beyond-model'] === undefined ? COVERAGE_DEFAULTS.beyondModel : parseBeyondModel(values['beyond-model']),
+    singleFile: values['single-file'] ?? false,
+    out: values.out ?? COVERAGE_DEFAULTS.out,
+    quiet: values.quiet ?? false,
+  };
+}

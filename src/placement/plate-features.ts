@@ -1,0 +1,182 @@
+/**
+ * Base polygons to reconstruct, read from a parsed GeoJSON object (RFC 7946): a
+ * FeatureCollection (or one Feature) of Polygon or MultiPolygon features, each with a
+ * `plate_id` property. Everything else is refused with every problem listed by feature.
+ *
+ * Ring orientation: RFC 7946 asks for exteriors anticlockwise and holes clockwise, and says
+ * readers should not refuse files that do not follow it. A present-day ring is read as the area
+ * it outlines on a lon/lat map (the sign of its planar shoelace area, as planar GIS readers do);
+ * a ring wound the other way is reversed into RFC 7946 order, and a note says so.
+ */
+import type { MultiPolygon, Polygon, Position } from 'geojson';
+import { MAX_PLATE_ID, parsePlateId } from '../table/number-field';
+
+/** Properties reconstruct adds to every feature it writes; an input may not have them already. */
+export const ADDED_PROPERTIES = ['slice', 'slice_name', 'reconstruction_age_ma'] as const;
+
+/** Problems listed in full; beyond this only their number. */
+const MAX_LISTED = 100;
+
+export interface PlateFeature {
+  /** Position in the input, from 1. */
+  readonly index: number;
+  readonly plateId: number;
+  /** The feature's `id` member, when it has one. */
+  readonly id?: string | number;
+  readonly properties: Readonly<Record<string, unknown>>;
+  /** Two-dimensional, rings in RFC 7946 order. */
+  readonly geometry: Polygon | MultiPolygon;
+}
+
+export interface PlateFeatureNote {
+  readonly feature: number;
+  readonly plateId: number;
+  readonly note: string;
+}
+
+/** A GeoJSON file that cannot be reconstructed: every problem found. */
+export class PlateFeatureError extends Error {
+  constructor(readonly source: string, readonly problems: readonly string[], unlisted: number) {
+    super([...problems.map((p) => `${source}: ${p}`), ...(unlisted > 0 ? [`… and ${unlisted} more problems in ${source}`] : [])].join('\n'));
+    this.name = 'PlateFeatureError';
+  }
+}
+
+const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+/** Twice the signed planar area of a closed lon/lat ring (shoelace formula); > 0 anticlockwise. */
+function shoelace(ring: readonly Position[]): number {
+  let sum = 0;
+  for (let k = 0; k + 1 < ring.length; k++) sum += ring[k][0] * ring[k + 1][1] - ring[k + 1][0] * ring[k][1];
+  return sum;
+}
+
+/** Two positions naming one point: on the same pole, or on ±180° at the same latitude. */
+function samePoint(a: Position, b: Position): boolean {
+  return (Math.abs(a[1]) === 90 && a[1] === b[1]) || (a[1] === b[1] && Math.abs(a[0]) === 180 && Math.abs(b[0]) === 180);
+}
+
+class Reader {
+  readonly problems: string[] = [];
+  unlisted = 0;
+  readonly notes: PlateFeatureNote[] = [];
+
+  problem(text: string): void {
+    if (this.problems.length < MAX_LISTED) this.problems.push(text);
+    else this.unlisted++;
+  }
+
+  /** A ring as 2-D positions in the wanted orientation, or undefined after a problem. */
+  ring(value: unknown, where: string, exterior: boolean, note: (text: string) => void): Position[] | undefined {
+    if (!Array.isArray(value) || value.length < 4) {
+      this.problem(`${where}: expected a closed ring of at least 4 positions`);
+      return undefined;
+    }
+    const ring: Position[] = [];
+    let extra = false;
+    for (let k = 0; k < value.length; k++) {
+      const p: unknown = value[k];
+      const ok = Array.isArray(p) && p.length >= 2 && p.every((v) => typeof v === 'number' && Number.isFinite(v));
+      if (!ok || Math.abs(p[0]) > 180 || Math.abs(p[1]) > 90) {
+        this.problem(`${where}, position ${k + 1} ${JSON.stringify(p)}: expected [longitude, latitude] in degrees, longitude from -180 to 180, latitude from -90 to 90`);
+        return undefined;
+      }
+      extra ||= p.length > 2;
+      ring.push([p[0], p[1]]);
+    }
+    const first = ring[0], last = ring[ring.length - 1];
+    if (first[0] !== last[0] || first[1] !== last[1]) {
+      this.problem(`${where}: the last position ${JSON.stringify(last)} differs from the first ${JSON.stringify(first)}; expected a closed ring`);
+      return undefined;
+    }
+    const jump = ring.findIndex((p, k) => k > 0 && Math.abs(p[0] - ring[k - 1][0]) > 180 && !samePoint(p, ring[k - 1]));
+    if (jump > 0) {
+      this.problem(`${where}: the edge from ${JSON.stringify(ring[jump - 1])} to ${JSON.stringify(ring[jump])} crosses the antimeridian; expected rings cut there into parts (RFC 7946 §3.1.9)`);
+      return undefined;
+    }
+    if (extra) note(`${where}: positions carry a third value (altitude); it is not carried into the reconstruction`);
+    const area = shoelace(ring);
+    if (area === 0) {
+      this.problem(`${where}: the ring encloses no area; expected a ring around an area`);
+      return undefined;
+    }
+    if (area > 0 !== exterior) {
+      ring.reverse();
+      note(`${where}: ${exterior ? 'exterior ring is clockwise' : 'hole is anticlockwise'}; read as the area it outlines on a lon/lat map and written in RFC 7946 order`);
+    }
+    return ring;
+  }
+
+  polygon(value: unknown, where: string, note: (text: string) => void): Position[][] | undefined {
+    if (!Array.isArray(value) || value.length === 0) {
+      this.problem(`${where}: expected an array of rings (the exterior, then any holes)`);
+      return undefined;
+    }
+    const rings = value.map((r, k) => this.ring(r, `${where}, ring ${k + 1}`, k === 0, note));
+    return rings.every((r) => r !== undefined) ? (rings as Position[][]) : undefined;
+  }
+
+  geometry(value: unknown, where: string, note: (text: string) => void): Polygon | MultiPolygon | undefined {
+    if (!isObject(value)) {
+      this.problem(`${where}: no geometry; expected a Polygon or MultiPolygon`);
+      return undefined;
+    }
+    if (value.type === 'Polygon') {
+      const rings = this.polygon(value.coordinates, where, note);
+      return rings === undefined ? undefined : { type: 'Polygon', coordinates: rings };
+    }
+    if (value.type === 'MultiPolygon') {
+      if (!Array.isArray(value.coordinates) || value.coordinates.length === 0) {
+        this.problem(`${where}: expected an array of polygons`);
+        return undefined;
+      }
+      const parts = value.coordinates.map((p: unknown, k: number) => this.polygon(p, `${where}, polygon ${k + 1}`, note));
+      return parts.every((p) => p !== undefined) ? { type: 'MultiPolygon', coordinates: parts as Position[][][] } : undefined;
+    }
+    this.problem(`${where}: geometry type ${JSON.stringify(value.type)}; expected Polygon or MultiPolygon (points belong in a table)`);
+    return undefined;
+  }
+
+  feature(value: unknown, index: number): PlateFeature | undefined {
+    const where = `feature ${index}`;
+    if (!isObject(value) || value.type !== 'Feature') {
+      this.problem(`${where}: expected an object with "type": "Feature"`);
+      return undefined;
+    }
+    const properties = isObject(value.properties) ? value.properties : {};
+    const raw = properties.plate_id;
+    const plateId = typeof raw === 'number' ? (Number.isInteger(raw) && raw >= 0 && raw <= MAX_PLATE_ID ? raw : -1)
+      : typeof raw === 'string' ? parsePlateId(raw) : -1;
+    if (plateId < 0) {
+      this.problem(`${where}: plate_id ${raw === undefined ? 'is missing' : JSON.stringify(raw)}; expected a property plate_id, a whole number from 0 to ${MAX_PLATE_ID}`);
+    }
+    for (const name of ADDED_PROPERTIES) {
+      if (name in properties) this.problem(`${where}: already has a property "${name}"; reconstruct adds it to every feature it writes, so rename it`);
+    }
+    const notes: string[] = [];
+    const geometry = this.geometry(value.geometry, where, (text) => notes.push(text));
+    if (geometry === undefined || plateId < 0) return undefined;
+    for (const note of notes) this.notes.push({ feature: index, plateId, note });
+    const id = typeof value.id === 'string' || typeof value.id === 'number' ? value.id : undefined;
+    return { index, plateId, ...(id === undefined ? {} : { id }), properties, geometry };
+  }
+}
+
+/**
+ * The features of a parsed GeoJSON object, validated and in RFC 7946 ring order, with notes on
+ * what was accepted but changed. Throws PlateFeatureError listing every problem.
+ */
+export function plateFeaturesOf(root: unknown, source: string): { features: PlateFeature[]; notes: PlateFeatureNote[] } {
+  const reader = new Reader();
+  let list: unknown[] = [];
+  if (isObject(root) && root.type === 'FeatureCollection' && Array.isArray(root.features)) list = root.features;
+  else if (isObject(root) && root.type === 'Feature') list = [root];
+  else {
+    const type = isObject(root) ? JSON.stringify(root.type) : 'none';
+    reader.problem(`type ${type}; expected a FeatureCollection of Polygon or MultiPolygon features with a plate_id property`);
+  }
+  if (list.length === 0 && reader.problems.length === 0) reader.problem('the FeatureCollection has no features; expected at least one');
+  const features = list.map((f, k) => reader.feature(f, k + 1));
+  if (reader.problems.length > 0) throw new PlateFeatureError(source, reader.problems, reader.unlisted);
+  return { features: features as PlateFeature[], notes: reader.notes };
+}
