@@ -22,11 +22,15 @@ export function degreesToUnitVectorsInto(latDeg: Float64Array, lonDeg: Float64Ar
 
 /** Writes the unit vector of one position (degrees) into out[offset … offset + 2]. */
 export function writeUnitVector(latDeg: number, lonDeg: number, out: Float64Array, offset: number): void {
-  const cosLat = cosDegrees(latDeg);
+  const lat = turnOf(latDeg), lon = turnOf(lonDeg);
+  const qLat = Math.round(lat / 90), qLon = Math.round(lon / 90);
+  const rLat = (lat - 90 * qLat) * RADIANS, rLon = (lon - 90 * qLon) * RADIANS;
+  const sLat = Math.sin(rLat), cLat = Math.cos(rLat), sLon = Math.sin(rLon), cLon = Math.cos(rLon);
+  const cosLat = cosQuadrant(qLat, sLat, cLat);
   // + 0 turns −0 into 0, so that equal places give bit-identical vectors.
-  out[offset] = cosLat * cosDegrees(lonDeg) + 0;
-  out[offset + 1] = cosLat * sinDegrees(lonDeg) + 0;
-  out[offset + 2] = sinDegrees(latDeg) + 0;
+  out[offset] = cosLat * cosQuadrant(qLon, sLon, cLon) + 0;
+  out[offset + 1] = cosLat * sinQuadrant(qLon, sLon, cLon) + 0;
+  out[offset + 2] = sinQuadrant(qLat, sLat, cLat) + 0;
 }
 
 /** Latitudes and longitudes (degrees) of interleaved unit vectors; the inverse of `degreesToUnitVectors`. */
@@ -53,27 +57,30 @@ export function unitVectorsToDegreesInto(xyz: Float64Array, outLat: Float64Array
 }
 
 // Sine and cosine of an angle in degrees, reduced exactly to r in [−45°, 45°] with
-// deg = r + 90°·q before the radian conversion (as GeographicLib's sincosd, Karney 2013).
-function sinDegrees(deg: number): number {
-  const turn = deg % 360; // exact
-  const q = Math.round(turn / 90);
-  const r = (turn - 90 * q) * RADIANS; // the subtraction is exact: |result| ≤ 45°
+// deg = r + 90°·q before the radian conversion (as GeographicLib's sincosd, Karney 2013): the
+// remainder modulo 360° is exact, and so is the subtraction, |result| ≤ 45°.
+
+/** The angle modulo 360° (exact); the remainder is skipped when it would change nothing. */
+function turnOf(deg: number): number {
+  return Math.abs(deg) < 360 ? deg : deg % 360;
+}
+
+/** sin(90°·q + r) from s = sin r and c = cos r. */
+function sinQuadrant(q: number, s: number, c: number): number {
   switch (q & 3) {
-    case 0: return Math.sin(r);
-    case 1: return Math.cos(r);
-    case 2: return -Math.sin(r);
-    default: return -Math.cos(r);
+    case 0: return s;
+    case 1: return c;
+    case 2: return -s;
+    default: return -c;
   }
 }
 
-function cosDegrees(deg: number): number {
-  const turn = deg % 360;
-  const q = Math.round(turn / 90);
-  const r = (turn - 90 * q) * RADIANS;
+/** cos(90°·q + r) from s = sin r and c = cos r. */
+function cosQuadrant(q: number, s: number, c: number): number {
   switch (q & 3) {
-    case 0: return Math.cos(r);
-    case 1: return -Math.sin(r);
-    case 2: return -Math.cos(r);
-    default: return Math.sin(r);
+    case 0: return c;
+    case 1: return -s;
+    case 2: return -c;
+    default: return s;
   }
 }
