@@ -4,7 +4,7 @@ import type { AssignRule, TimeScale } from './time/time-scale';
 import { assignSlices } from './time/assign-slices';
 import { DistinctCounter } from './footprint/distinct-counter';
 import { groupBySlice } from './footprint/group-by-slice';
-import { positionCodes } from './footprint/position-codes';
+import { slicePositions } from './footprint/slice-positions';
 import { tallyCells, type CellTallies } from './footprint/cell-tallies';
 import { gather } from './footprint/gather';
 import { measureFootprint, type Footprint } from './footprint/slice-footprint';
@@ -65,29 +65,25 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
 
   const sliceCount = scale.names.length;
   const { order, start } = groupBySlice(sliceOfRow, sliceCount);
-  const positions = positionCodes(palaeoLat, palaeoLon);
   const collectionsArePositions = table.collection.values.length === 0;
-  const collectionCodes = collectionsArePositions ? positions.codes : table.collection.codes;
 
   // Every column the slices need, gathered into slice order once (see gather.ts).
   const lat = gather(palaeoLat, order);
   const lon = gather(palaeoLon, order);
+  const places = slicePositions(lat, lon, start);
   const rows = {
     start,
     cell: new Uint32Array(order.length),
-    collection: gather(collectionCodes, order),
+    collection: collectionsArePositions ? places.codes : gather(table.collection.codes, order),
     taxon: gather(table.taxon.codes, order),
   };
   grid.cellsOf(lat, lon, rows.cell);
-  const position = gather(positions.codes, order);
 
-  const collectionCounter = new DistinctCounter(collectionsArePositions ? positions.count : table.collection.values.length);
+  const collectionCounter = new DistinctCounter(collectionsArePositions ? places.mostInOneSlice : table.collection.values.length);
   const taxonCounter = new DistinctCounter(table.taxon.values.length);
-  const positionCounter = new DistinctCounter(positions.count);
   const cells = tallyCells(rows, collectionCounter, taxonCounter);
 
   const inOrder = identityOrder(order.length);
-  const firstRows = new Uint32Array(order.length);
   const slices: SliceMetrics[] = [];
   let cellEntry = 0;
   for (let s = 0; s < sliceCount; s++) {
@@ -98,13 +94,6 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
       occupied++;
       cellEntry++;
     }
-    const distinct = positionCounter.firstRowsInto(position, inOrder, from, to, firstRows);
-    const distinctLat = new Float64Array(distinct);
-    const distinctLon = new Float64Array(distinct);
-    for (let k = 0; k < distinct; k++) {
-      distinctLat[k] = lat[firstRows[k]];
-      distinctLon[k] = lon[firstRows[k]];
-    }
     slices.push({
       name: scale.names[s],
       baseMa: scale.baseMa[s],
@@ -113,7 +102,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
       collections: collectionCounter.count(rows.collection, inOrder, from, to),
       taxa: taxonCounter.count(rows.taxon, inOrder, from, to),
       cells: occupied,
-      ...measureFootprint(distinctLat, distinctLon),
+      ...measureFootprint(places.lat[s], places.lon[s]),
     });
   }
 

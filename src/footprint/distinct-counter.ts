@@ -28,22 +28,6 @@ export class DistinctCounter {
     return distinct;
   }
 
-  /** Writes the first row index of each distinct code among order[from … to - 1] into `out`; returns how many. */
-  firstRowsInto(codes: Uint32Array, order: Uint32Array, from: number, to: number, out: Uint32Array): number {
-    const seen = this.seen;
-    const stamp = this.nextStamp();
-    let distinct = 0;
-    for (let k = from; k < to; k++) {
-      const row = order[k];
-      const code = codes[row];
-      if (code !== ABSENT_CODE && seen[code] !== stamp) {
-        seen[code] = stamp;
-        out[distinct++] = row;
-      }
-    }
-    return distinct;
-  }
-
   private nextStamp(): number {
     if (this.stamp === 0xffffffff) {
       this.seen.fill(0);
