@@ -3,6 +3,8 @@ import { RADIANS } from '../sphere/earth';
 import { nestedFace, nestedX, nestedY } from './healpix-nested';
 import { healpixFacePointInto, isFacePole } from './healpix-projection';
 
+const FACE_SIDE_RAD = Math.sqrt((4 * Math.PI) / 12);
+
 /**
  * Outline of a NESTED cell at nside = 2^order as a closed ring of [lon, lat] degrees,
  * counter-clockwise seen from above (south → east → north → west corner). Each edge is sampled
@@ -45,7 +47,9 @@ function appendEdge(
   const point = new Float64Array(2);
   let lat: Float64Array;
   let lon: Float64Array;
-  let n = 1;
+  // First guess: a face side spans about √(4π/12) rad (the square root of a base cell's area);
+  // the loop below still checks every step and refines.
+  let n = Math.max(1, Math.ceil((FACE_SIDE_RAD * Math.hypot(bx - ax, by - ay)) / maxStepRad));
   for (;;) {
     lat = new Float64Array(n + 1);
     lon = new Float64Array(n + 1);
