@@ -7,15 +7,11 @@
 // row, Math.sin/cos/atan2), and gathering each slice's rows to call reconstructPointsInto once
 // per slice.
 // Run: npx tsx test/bench/placement.bench.ts (or `npm run bench placement`).
-import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { placeOccurrences } from '../../src/placement';
-import {
-  createRotationModel, poleTableFromRecords, reconstructPointsInto, type RotationModel,
-} from '../../src/rotation';
+import { reconstructPointsInto, type RotationModel } from '../../src/rotation';
 import type { OccurrenceTable } from '../../src/table';
 import { assignSlices, equalBins, createSeededRandom, type SliceAssignment, type TimeScale } from '../../src/time';
+import { demoModel } from './demo-model';
 import { report, time } from './measure';
 
 const ROWS = 1_000_000;
@@ -25,12 +21,6 @@ const SEED = 20250611;
 const REPETITIONS = 10;
 const WARM_UP = 3;
 const DEG = 180 / Math.PI;
-
-function demoModel(): RotationModel {
-  const file = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'assets', 'demo', 'poles.csv');
-  const [header, ...lines] = readFileSync(file, 'utf8').trimEnd().split('\n');
-  return createRotationModel(poleTableFromRecords(header.split(','), lines.map((l, i) => ({ line: i + 2, fields: l.split(',') })), 'poles.csv'));
-}
 
 function presentDayTable(plates: readonly number[]): OccurrenceTable {
   const random = createSeededRandom(SEED);

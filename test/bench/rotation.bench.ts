@@ -4,13 +4,9 @@
 // straightforward per-point version in the same process (the model asked per point, a rotation
 // matrix built per point, an object per point, Math.sin/cos/atan2).
 // Run: npx tsx test/bench/rotation.bench.ts (or `npm run bench rotation`).
-import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
-import {
-  createRotationModel, poleTableFromRecords, reconstructPointsInto, type RotationModel,
-} from '../../src/rotation';
+import { reconstructPointsInto, type RotationModel } from '../../src/rotation';
 import { createSeededRandom } from '../../src/time/seeded-random';
+import { demoModel } from './demo-model';
 import { report, time } from './measure';
 
 const POINTS = 1_000_000;
@@ -21,12 +17,6 @@ const SEED = 20250417;
 const REPETITIONS = 10;
 const WARM_UP = 3;
 const DEG = 180 / Math.PI;
-
-function demoModel(): RotationModel {
-  const file = join(dirname(fileURLToPath(import.meta.url)), '..', '..', 'assets', 'demo', 'poles.csv');
-  const [header, ...lines] = readFileSync(file, 'utf8').trimEnd().split('\n');
-  return createRotationModel(poleTableFromRecords(header.split(','), lines.map((l, i) => ({ line: i + 2, fields: l.split(',') })), 'poles.csv'));
-}
 
 function points(plates: readonly number[]): { lat: Float64Array; lon: Float64Array; plateId: Int32Array; sliceAge: Float64Array } {
   const random = createSeededRandom(SEED);
