@@ -28,7 +28,14 @@ export function printSummary(summary: RunSummary): void {
   const occupied = result.slices.filter((s) => s.occurrences > 0).length;
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);
   const noHull = result.slices.filter((s) => s.occurrences > 0 && s.hullNote !== undefined);
-  if (noHull.length > 0) out.push(`  no convex hull for ${noHull.length} slice(s): ${noHull.map((s) => `${s.name} (${s.hullNote})`).join('; ')}`);
+  if (noHull.length > 0) {
+    out.push(`  no convex hull for ${noHull.length} slice(s) with occurrences (hull_km2 left empty):`);
+    for (const [note] of countBy(noHull.map((s) => s.hullNote as string))) {
+      const names = noHull.filter((s) => s.hullNote === note).map((s) => s.name);
+      const shown = names.slice(0, LISTED_SLICES).join(', ') + (names.length > LISTED_SLICES ? ` and ${names.length - LISTED_SLICES} more` : '');
+      out.push(`    ${note}: ${shown}`);
+    }
+  }
   if (result.collectionsArePositions) out.push('  the table names no collections: "collections" counts distinct positions');
   out.push(`wrote ${summary.written.join(', ')}`);
   out.push(`elapsed: ${(summary.elapsedMs / 1000).toFixed(2)} s`);
@@ -50,6 +57,9 @@ function placementLines(result: AnalysisResult, model: RotationModel | undefined
 export function modelNotes(model: RotationModel): string[] {
   return model.notes.map((note) => `  rotation model note: ${note}`);
 }
+
+/** Slice names listed per reason in the summary; the rest are counted. */
+const LISTED_SLICES = 6;
 
 export function countBy(keys: readonly string[]): Array<[string, number]> {
   const counts = new Map<string, number>();

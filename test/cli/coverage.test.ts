@@ -157,5 +157,7 @@ describe('the built command', () => {
     expect(child.status).toBe(0);
     expect(child.stdout).toMatch(/rows read: 49,906; accepted: 49,906; rejected: 0/);
     expect(child.stdout).toMatch(/elapsed: \d+\.\d\d s/);
+    // The demo's two widest slices span more than a hemisphere: named, grouped by reason.
+    expect(child.stdout).toMatch(/no convex hull for 2 slice\(s\)[^\n]*\n\s+positions do not fit in an open hemisphere: Campanian, Maastrichtian\n/);
   });
 });
