@@ -1,8 +1,8 @@
 export {
   axisAngleFromQuaternionInto, conjugateQuaternionInto, createQuaternion, identityInto, multiplyQuaternionsInto,
   normalizeQuaternionInto, poleFromQuaternion, quaternionFromAxisAngleInto, quaternionFromPole, rotateVectorInto,
-  slerpQuaternionsInto,
 } from './quaternion';
+export { slerpQuaternionsInto } from './slerp';
 export type { Quaternion, RotationPole } from './quaternion';
 export { rotationMatrixFromQuaternionInto } from './rotation-matrix';
 export { POLE_TABLE_COLUMNS, poleTableFromRecords } from './pole-table';

@@ -13,6 +13,7 @@
 import type { PoleTable } from './pole-table';
 import { ProblemList } from './pole-table-error';
 import { createQuaternion, quaternionFromPole, type Quaternion } from './quaternion';
+import { SLERP_ARC_SIZE, slerpArcInto } from './slerp';
 
 /** A 0 Ma row rotating by less than this (radians of the quaternion's vector part) is the identity. */
 const IDENTITY_TOLERANCE = 1e-12;
@@ -27,6 +28,9 @@ export interface PlateIntervals {
   /** Rotation relative to the parent at the younger and at the older end of each interval. */
   readonly young: readonly Quaternion[];
   readonly old: readonly Quaternion[];
+  /** The slerp arc from young to old of each interval, SLERP_ARC_SIZE numbers each: worked out
+   * once here, as a model interpolates every interval at many ages. */
+  readonly arcs: Float64Array;
 }
 
 /** A tabulated age of one plate: its rows there (one, or two across a change of parent);
@@ -109,7 +113,9 @@ function intervalsOf(table: PoleTable, plate: number, rows: readonly number[], p
       notes.push(`line ${table.line[r]}: the 0 Ma rotation of plate ${plate} is not the identity, so its present-day positions move at 0 Ma`);
     }
   }
-  return { plateId: plate, ages: Float64Array.from(knots, (k) => k.ageMa), parents, young, old };
+  const arcs = new Float64Array(SLERP_ARC_SIZE * n);
+  for (let k = 0; k < n; k++) slerpArcInto(young[k], old[k], arcs, SLERP_ARC_SIZE * k);
+  return { plateId: plate, ages: Float64Array.from(knots, (k) => k.ageMa), parents, young, old, arcs };
 }
 
 /** The intervals of every plate in the table, by plate id; throws PoleTableError on the

@@ -13,10 +13,6 @@ import { DEGREES, RADIANS } from '../sphere/earth';
 
 export type Quaternion = Float64Array;
 
-/** Below this angle between two quaternions (radians on the 3-sphere) slerp falls back to a
- * normalised linear blend: the error is O(θ²), far below double precision. */
-const SLERP_LINEAR_BELOW = 1e-9;
-
 /** A rotation given as an Euler pole and an angle, all in degrees. */
 export interface RotationPole {
   readonly lat: number;
@@ -148,36 +144,4 @@ export function rotateVectorInto(
   out[1] = vy + w * ty + (uz * tx - ux * tz);
   out[2] = vz + w * tz + (ux * ty - uy * tx);
   return out;
-}
-
-/**
- * Spherical linear interpolation (Shoemake 1985, "Animating rotation with quaternion
- * curves", SIGGRAPH) from `a` (t = 0) to `b` (t = 1) along the shorter arc: when a·b < 0, −b
- * stands for b, so the rotation turns through the smaller angle.
- */
-export function slerpQuaternionsInto(
-  a: ArrayLike<number>, b: ArrayLike<number>, t: number, out: Quaternion,
-): Quaternion {
-  const aw = a[0], ax = a[1], ay = a[2], az = a[3];
-  const sign = aw * b[0] + ax * b[1] + ay * b[2] + az * b[3] < 0 ? -1 : 1;
-  const bw = sign * b[0], bx = sign * b[1], by = sign * b[2], bz = sign * b[3];
-  // Angle between a and b on the 3-sphere, from chord lengths: exact near 0 where acos is not.
-  const theta = 2 * Math.atan2(
-    Math.hypot(aw - bw, ax - bx, ay - by, az - bz),
-    Math.hypot(aw + bw, ax + bx, ay + by, az + bz),
-  );
-  let ka: number, kb: number;
-  if (theta < SLERP_LINEAR_BELOW) {
-    ka = 1 - t;
-    kb = t;
-  } else {
-    const s = Math.sin(theta);
-    ka = Math.sin((1 - t) * theta) / s;
-    kb = Math.sin(t * theta) / s;
-  }
-  out[0] = ka * aw + kb * bw;
-  out[1] = ka * ax + kb * bx;
-  out[2] = ka * ay + kb * by;
-  out[3] = ka * az + kb * bz;
-  return theta < SLERP_LINEAR_BELOW ? normalizeQuaternionInto(out, out) : out;
 }

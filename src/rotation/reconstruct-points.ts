@@ -6,7 +6,7 @@
  */
 import { degreesOfRowsInto, rotateRowsInto } from './rotation-kernels';
 import { PlateAgeGroups } from './plate-age-groups';
-import { createQuaternion } from './quaternion';
+import { createQuaternion, type Quaternion } from './quaternion';
 import type { RotationModel } from './rotation-model';
 import { rotationMatrixFromQuaternionInto } from './rotation-matrix';
 import { ROTATION_STATUS } from './rotation-status';
@@ -51,7 +51,7 @@ export function reconstructPointsInto(
   }
   if (out.lat.length < n || out.lon.length < n || out.status.length < n) throw new RangeError(`Output columns are shorter than the ${n} rows.`);
   const groups = new PlateAgeGroups();
-  const work: Work = { matrices: new Float64Array(9 * 64), groupStatus: new Uint8Array(64), rowGroup: new Int32Array(CHUNK), xyz: new Float64Array(3 * CHUNK) };
+  const work: Work = { matrices: new Float64Array(9 * 64), groupStatus: new Uint8Array(64), rowGroup: new Int32Array(CHUNK), xyz: new Float64Array(3 * CHUNK), rotation: createQuaternion() };
   for (let start = 0; start < n; start += CHUNK) {
     const end = Math.min(n, start + CHUNK);
     groupChunk(model, points, ages, start, end, groups, work, out.status);
@@ -61,13 +61,14 @@ export function reconstructPointsInto(
   return out;
 }
 
-/** Per call: each group's status and matrix, and per chunk row its group (−1: not rotated)
- * and rotated unit vector. */
+/** Per call: each group's status and matrix, per chunk row its group (−1: not rotated) and
+ * rotated unit vector, and the scratch rotation each new group is composed into. */
 interface Work {
   matrices: Float64Array;
   groupStatus: Uint8Array;
   readonly rowGroup: Int32Array;
   readonly xyz: Float64Array;
+  readonly rotation: Quaternion;
 }
 
 // The three passes over a chunk are separate functions so that V8 inlines the small kernels
@@ -105,9 +106,8 @@ function resolveGroup(model: RotationModel, g: number, plate: number, age: numbe
     work.matrices = m;
     work.groupStatus = s;
   }
-  const q = createQuaternion();
-  work.groupStatus[g] = model.tryRotationAt(plate, age, q);
-  if (work.groupStatus[g] <= CLAMPED) rotationMatrixFromQuaternionInto(q, work.matrices, 9 * g);
+  work.groupStatus[g] = model.tryUncachedRotationAt(plate, age, work.rotation);
+  if (work.groupStatus[g] <= CLAMPED) rotationMatrixFromQuaternionInto(work.rotation, work.matrices, 9 * g);
 }
 
 /** `reconstructPointsInto` with new output columns. */

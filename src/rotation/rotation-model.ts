@@ -19,8 +19,9 @@ import { intervalAt, plateIntervalsOf, type PlateIntervals } from './plate-inter
 import { plateChainsOf, type PlateReach } from './plate-chains';
 import type { PoleTable } from './pole-table';
 import {
-  createQuaternion, identityInto, multiplyQuaternionsInto, slerpQuaternionsInto, type Quaternion,
+  createQuaternion, identityInto, multiplyQuaternionsInto, type Quaternion,
 } from './quaternion';
+import { SLERP_ARC_SIZE, slerpAlongArcInto } from './slerp';
 import { RotationLookupError } from './rotation-lookup-error';
 import { ROTATION_STATUS, type RotationStatus } from './rotation-status';
 
@@ -93,6 +94,17 @@ export class RotationModel {
    * beyondModel and leaves `out` as it was. Repeated (plate, age) pairs come from a cache.
    */
   tryRotationAt(plateId: number, ageMa: number, out: Quaternion): RotationStatus {
+    return this.lookUp(plateId, ageMa, out, true);
+  }
+
+  /** As `tryRotationAt`, but composes the rotation afresh into `out` and keeps nothing: for
+   * callers that ask for each (plate, age) once (reconstructPointsInto groups its rows), where
+   * a cache entry per row's own age would only cost memory and garbage collection. */
+  tryUncachedRotationAt(plateId: number, ageMa: number, out: Quaternion): RotationStatus {
+    return this.lookUp(plateId, ageMa, out, false);
+  }
+
+  private lookUp(plateId: number, ageMa: number, out: Quaternion, cached: boolean): RotationStatus {
     if (!(ageMa >= 0)) return ROTATION_STATUS.noAge;
     if (plateId === this.fixedPlate) {
       identityInto(out);
@@ -106,7 +118,8 @@ export class RotationModel {
       ageMa = reach.reachMa;
       status = ROTATION_STATUS.clamped;
     }
-    out.set(this.cachedTotal(plateId, ageMa));
+    if (cached) out.set(this.cachedTotal(plateId, ageMa));
+    else this.totalInto(plateId, ageMa, out);
     return status;
   }
 
@@ -160,7 +173,7 @@ export class RotationModel {
   private relativeInto(p: PlateIntervals, ageMa: number, out: Quaternion): number {
     const k = intervalAt(p, ageMa);
     const span = p.ages[k + 1] - p.ages[k];
-    slerpQuaternionsInto(p.young[k], p.old[k], span > 0 ? (ageMa - p.ages[k]) / span : 0, out);
+    slerpAlongArcInto(p.young[k], p.arcs, SLERP_ARC_SIZE * k, span > 0 ? (ageMa - p.ages[k]) / span : 0, out);
     return p.parents[k];
   }
 }

@@ -11,8 +11,8 @@ import {
   quaternionFromAxisAngleInto,
   quaternionFromPole,
   rotateVectorInto,
-  slerpQuaternionsInto,
 } from '../../src/rotation/quaternion';
+import { SLERP_ARC_SIZE, slerpAlongArcInto, slerpArcInto, slerpQuaternionsInto } from '../../src/rotation/slerp';
 
 // Independent reference: rotation matrices by Rodrigues' formula (see ./rodrigues for the
 // citation). Nothing in it uses quaternions.
@@ -202,6 +202,19 @@ describe('normalising and interpolating', () => {
       const expected = apply(geodesicBetween(ma, mb, t), unit(p.lat, p.lon));
       const q = slerpQuaternionsInto(quaternionFromPole(ra.lat, ra.lon, ra.angle), quaternionFromPole(rb.lat, rb.lon, rb.angle), t, createQuaternion());
       expectVecClose(rotateVectorInto(q, unit(p.lat, p.lon), new Float64Array(3)), expected, 1e-9);
+    }));
+  });
+
+  it('follows the matrix geodesic at every t along one arc worked out beforehand', () => {
+    fc.assert(fc.property(pole, pole, fc.array(degrees(0, 1), { minLength: 1, maxLength: 5 }), point, (ra, rb, ts, p) => {
+      const ma = rodrigues(unit(ra.lat, ra.lon), ra.angle * RAD), mb = rodrigues(unit(rb.lat, rb.lon), rb.angle * RAD);
+      fc.pre(axisAngleOfMatrix(matMul(mb, transpose(ma))).angle < Math.PI - 1e-6);
+      const a = quaternionFromPole(ra.lat, ra.lon, ra.angle);
+      const arcs = slerpArcInto(a, quaternionFromPole(rb.lat, rb.lon, rb.angle), new Float64Array(2 * SLERP_ARC_SIZE), SLERP_ARC_SIZE);
+      for (const t of ts) {
+        const q = slerpAlongArcInto(a, arcs, SLERP_ARC_SIZE, t, createQuaternion());
+        expectVecClose(rotateVectorInto(q, unit(p.lat, p.lon), new Float64Array(3)), apply(geodesicBetween(ma, mb, t), unit(p.lat, p.lon)), 1e-9);
+      }
     }));
   });
 

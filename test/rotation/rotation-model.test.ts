@@ -293,6 +293,18 @@ describe('the rotation cache', () => {
     expect(Array.from(fresh.rotationAt(2, 69.999))).toEqual(Array.from(model.rotationAt(2, 69.999)));
   });
 
+  it('is bypassed by tryUncachedRotationAt, which gives the same status and bit-identical rotation', () => {
+    // Plate 2 changes parent at 60 Ma; plate 3 rides on 2; plates reach 100 Ma, older ages clamp.
+    const table = ['1,100,20,30,40,0', '2,60,-20,-30,50,1', '2,60,10,15,20,0', '2,100,5,25,30,0', '3,80,45,-60,12,2'];
+    const model = modelOf(table, BEYOND_MODEL.clamp);
+    const cached = createQuaternion(), uncached = createQuaternion();
+    fc.assert(fc.property(fc.constantFrom(1, 2, 3, 0, 9), fc.oneof(degrees(-1, 130), fc.constantFrom(0, 60, 80, 100)), (plate, age) => {
+      const status = model.tryRotationAt(plate, age, cached);
+      expect(model.tryUncachedRotationAt(plate, age, uncached)).toBe(status);
+      if (status <= ROTATION_STATUS.clamped) expect(Array.from(uncached)).toEqual(Array.from(cached));
+    }));
+  });
+
   it('hands out copies, so a caller writing into the result cannot spoil the cache', () => {
     const model = modelOf(['1,100,20,30,40,0']);
     const q = model.rotationAt(1, 50);
