@@ -1,5 +1,5 @@
 import { detectDelimiter, type Delimiter } from './delimiter-detection';
-import { scanQuotedRecord, type QuotedRecordState } from './quoted-record';
+import { scanQuotedRecord, scanQuotedSpans, type QuotedRecordState } from './quoted-record';
 import { RecordView, type ScannedRecord } from './scanned-record';
 import { TableReadError } from './table-read-error';
 
@@ -69,9 +69,9 @@ class Scanner implements CsvScanner {
       this.started = true;
       if (chunk.charCodeAt(0) === 0xfeff) chunk = chunk.slice(1); // byte-order mark, not data
     }
-    // Joining makes a V8 cons string, on which every charCodeAt pays an indirection; slicing
-    // the joined text (with a throwaway first character) makes it flat once.
-    this.buf = this.pos < this.buf.length ? (' ' + this.buf.slice(this.pos) + chunk).slice(1) : chunk;
+    // `+` would make a V8 cons string, and slicing one a sliced string, on which every
+    // charCodeAt pays an indirection; Array.prototype.join writes one flat string.
+    this.buf = this.pos < this.buf.length ? [this.buf.slice(this.pos), chunk].join('') : chunk;
     this.pos = 0;
     this.scan(false);
     if (this.buf.length - this.pos > this.max) throw this.tooLong();
@@ -144,22 +144,28 @@ class Scanner implements CsvScanner {
     }
   }
 
+  /** A record with a quote: spans of the buffer when no value needs unescaping, else cut values. */
   private scanQuoted(final: boolean): boolean {
     const q = this.quoted;
-    const values = this.values;
-    const done = scanQuotedRecord(this.buf, this.pos, this.line, this.delim, final, values, q);
-    this.openQuoteLine = q.openQuoteLine;
-    if (!done) return false;
     const v = this.view;
-    let at = 0;
-    for (let k = 0; k < values.length; k++) {
-      v.reserve(k);
-      v.start[k] = at;
-      at += values[k].length;
-      v.end[k] = at;
+    if (scanQuotedSpans(this.buf, this.pos, this.line, this.delim, final, v, q)) {
+      v.text = this.buf;
+    } else {
+      const values = this.values;
+      const done = scanQuotedRecord(this.buf, this.pos, this.line, this.delim, final, values, q);
+      this.openQuoteLine = q.openQuoteLine;
+      if (!done) return false;
+      let at = 0;
+      for (let k = 0; k < values.length; k++) {
+        v.reserve(k);
+        v.start[k] = at;
+        at += values[k].length;
+        v.end[k] = at;
+      }
+      v.count = values.length;
+      v.text = values.join('');
     }
-    v.count = values.length;
-    v.text = values.join('');
+    this.openQuoteLine = 0;
     this.emit(this.pos, q.end, this.line, q.problem);
     this.line = q.lastLine + 1;
     this.pos = q.after;

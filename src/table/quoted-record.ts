@@ -1,3 +1,4 @@
+import type { RecordView } from './scanned-record';
 import { TableReadError } from './table-read-error';
 
 const LF = 10;
@@ -83,6 +84,52 @@ export function scanQuotedRecord(
     out.end = i;
     out.after = after;
     out.lastLine = line;
+    return true;
+  }
+}
+
+/**
+ * The common case of scanQuotedRecord without cutting strings: when no quoted field holds ""
+ * or text after its closing quote, every value is a span of `text`, written into `view`.
+ * Returns false, with `out` partly written, when the record needs scanQuotedRecord: such a
+ * field, or a record that runs past the end of `text`.
+ */
+export function scanQuotedSpans(
+  text: string, start: number, line: number, delim: number, final: boolean,
+  view: RecordView, out: QuotedRecordState,
+): boolean {
+  const n = text.length;
+  let k = 0;
+  let i = start;
+  for (;;) {
+    let from = i;
+    let to: number;
+    if (i < n && text.charCodeAt(i) === QUOTE) {
+      from = i + 1;
+      to = text.indexOf('"', from);
+      if (to < 0 || to + 1 === n || text.charCodeAt(to + 1) === QUOTE) return false;
+      line += countLineBreaks(text, from, to);
+      i = to + 1;
+      const c = text.charCodeAt(i);
+      if (c !== delim && c !== LF && c !== CR) return false;
+    } else {
+      i = fieldEnd(text, i, delim);
+      to = i;
+    }
+    view.reserve(k);
+    view.start[k] = from;
+    view.end[k++] = to;
+    if (i < n && text.charCodeAt(i) === delim) {
+      i++;
+      continue;
+    }
+    if (i === n || (text.charCodeAt(i) === CR && i + 1 === n)) return false;
+    view.count = k;
+    out.end = i;
+    out.after = text.charCodeAt(i) === CR && text.charCodeAt(i + 1) === LF ? i + 2 : i + 1;
+    out.lastLine = line;
+    out.problem = undefined;
+    out.openQuoteLine = 0;
     return true;
   }
 }

@@ -124,6 +124,12 @@ describe('failures', () => {
       /line 2: a quoted field starts here and is still open after 100 characters; check for an unbalanced quote/,
     );
   });
+
+  it('blames a long record, not a quote, once a quoted field left open at a chunk end has closed', () => {
+    expect(() => scan(['a,b\nc,"d', '"\n', 'x'.repeat(80), 'x'.repeat(80)], { maxRecordChars: 100 })).toThrow(
+      /line 3: a record longer than 100 characters/,
+    );
+  });
 });
 
 describe('properties', () => {
