@@ -1,7 +1,7 @@
-import { parseArgs } from 'node:util';
+import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { ROTATE_AT, type RotateAt } from '../placement';
 import { BEYOND_MODEL, type BeyondModel } from '../rotation';
-import { parseBeyondModel, parseMap, parseRotateAt, parseSeed } from './option-values';
+import { parseBeyondModel, parseMap, parseRotateAt, parseSeed, SHARED_OPTIONS, usageError } from './option-values';
 
 export interface CoverageOptions {
   readonly input: string | undefined;
@@ -29,30 +29,19 @@ const SESSION_FIXED = ['bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rot
 /** Options that only mean something with a rotation model. */
 const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
 
+const COVERAGE_OPTIONS = {
+  ...SHARED_OPTIONS,
+  grid: { type: 'string' },
+  'prefer-model': { type: 'boolean' },
+  session: { type: 'string' },
+} as const satisfies NonNullable<ParseArgsConfig['options']>;
+
 export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
   let parsed;
   try {
-    parsed = parseArgs({
-      args: [...args],
-      allowPositionals: true,
-      strict: true,
-      options: {
-        bins: { type: 'string' },
-        assign: { type: 'string' },
-        seed: { type: 'string' },
-        grid: { type: 'string' },
-        map: { type: 'string', multiple: true },
-        rotation: { type: 'string' },
-        'rotate-at': { type: 'string' },
-        'prefer-model': { type: 'boolean' },
-        'beyond-model': { type: 'string' },
-        out: { type: 'string' },
-        session: { type: 'string' },
-        quiet: { type: 'boolean' },
-      },
-    });
+    parsed = parseArgs({ args: [...args], allowPositionals: true, strict: true, options: COVERAGE_OPTIONS });
   } catch (error) {
-    throw new Error(`${(error as Error).message}. See \`driftgrid --help\`.`);
+    throw usageError(error);
   }
   const { values, positionals } = parsed;
   if (positionals.length > 1) throw new Error(`coverage takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);

@@ -1,3 +1,4 @@
+import type { ParseArgsConfig } from 'node:util';
 import { ROTATE_AT, type RotateAt } from '../placement';
 import { BEYOND_MODEL, type BeyondModel } from '../rotation';
 
@@ -35,4 +36,22 @@ export function parseBeyondModel(text: string): BeyondModel {
   const values: readonly string[] = Object.values(BEYOND_MODEL);
   if (!values.includes(text)) throw new Error(`--beyond-model "${text}": expected ${values.join(' or ')}.`);
   return text as BeyondModel;
+}
+
+/** The options `coverage` and `reconstruct` both take, as node:util parseArgs specs. */
+export const SHARED_OPTIONS = {
+  bins: { type: 'string' },
+  assign: { type: 'string' },
+  seed: { type: 'string' },
+  map: { type: 'string', multiple: true },
+  rotation: { type: 'string' },
+  'rotate-at': { type: 'string' },
+  'beyond-model': { type: 'string' },
+  out: { type: 'string' },
+  quiet: { type: 'boolean' },
+} as const satisfies NonNullable<ParseArgsConfig['options']>;
+
+/** An option error from node:util parseArgs, pointing to --help. */
+export function usageError(error: unknown): Error {
+  return new Error(`${(error as Error).message}. See \`driftgrid --help\`.`);
 }

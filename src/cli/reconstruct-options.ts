@@ -1,9 +1,9 @@
+import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { extname } from 'node:path';
-import { parseArgs } from 'node:util';
 import type { RotateAt } from '../placement';
 import type { BeyondModel } from '../rotation';
 import { COVERAGE_DEFAULTS } from './coverage-options';
-import { parseBeyondModel, parseMap, parseRotateAt, parseSeed } from './option-values';
+import { parseBeyondModel, parseMap, parseRotateAt, parseSeed, SHARED_OPTIONS, usageError } from './option-values';
 
 /** What reconstruct reads: an occurrence (or site) table, or GeoJSON polygons. */
 export const RECONSTRUCT_INPUT = { table: 'table', geojson: 'geojson' } as const;
@@ -28,28 +28,14 @@ const GEOJSON_EXTENSIONS = ['.geojson', '.json'];
 /** Options about rows of a table, meaningless for polygons (reconstructed at each slice's mid-age). */
 const TABLE_ONLY = ['assign', 'seed', 'map', 'rotate-at'] as const;
 
+const RECONSTRUCT_OPTIONS = { ...SHARED_OPTIONS, 'single-file': { type: 'boolean' } } as const satisfies NonNullable<ParseArgsConfig['options']>;
+
 export function parseReconstructOptions(args: readonly string[]): ReconstructOptions {
   let parsed;
   try {
-    parsed = parseArgs({
-      args: [...args],
-      allowPositionals: true,
-      strict: true,
-      options: {
-        rotation: { type: 'string' },
-        bins: { type: 'string' },
-        assign: { type: 'string' },
-        seed: { type: 'string' },
-        map: { type: 'string', multiple: true },
-        'rotate-at': { type: 'string' },
-        'beyond-model': { type: 'string' },
-        'single-file': { type: 'boolean' },
-        out: { type: 'string' },
-        quiet: { type: 'boolean' },
-      },
-    });
+    parsed = parseArgs({ args: [...args], allowPositionals: true, strict: true, options: RECONSTRUCT_OPTIONS });
   } catch (error) {
-    throw new Error(`${(error as Error).message}. See \`driftgrid --help\`.`);
+    throw usageError(error);
   }
   const { values, positionals } = parsed;
   if (positionals.length !== 1) {

@@ -11,7 +11,7 @@ import { placeOccurrences } from '../../src/placement';
 import { reconstructPointsInto, type RotationModel } from '../../src/rotation';
 import type { OccurrenceTable } from '../../src/table';
 import { assignSlices, equalBins, createSeededRandom, type SliceAssignment, type TimeScale } from '../../src/time';
-import { demoModel } from './demo-model';
+import { demoModel, rotatePointNaively } from './rotation-fixtures';
 import { report, time } from './measure';
 
 const ROWS = 1_000_000;
@@ -44,17 +44,9 @@ function presentDayTable(plates: readonly number[]): OccurrenceTable {
 function reference(model: RotationModel, table: OccurrenceTable, assignment: SliceAssignment, scale: TimeScale, outLat: Float64Array, outLon: Float64Array): void {
   for (let i = 0; i < table.count; i++) {
     const s = assignment.slice[i];
-    const [w, x, y, z] = model.rotationAt(table.plateId[i], 0.5 * (scale.baseMa[s] + scale.topMa[s]));
-    const m = [
-      [1 - 2 * (y * y + z * z), 2 * (x * y - w * z), 2 * (x * z + w * y)],
-      [2 * (x * y + w * z), 1 - 2 * (x * x + z * z), 2 * (y * z - w * x)],
-      [2 * (x * z - w * y), 2 * (y * z + w * x), 1 - 2 * (x * x + y * y)],
-    ];
-    const p = { phi: table.lat[i] / DEG, lambda: table.lon[i] / DEG };
-    const v = [Math.cos(p.phi) * Math.cos(p.lambda), Math.cos(p.phi) * Math.sin(p.lambda), Math.sin(p.phi)];
-    const r = m.map((row) => row[0] * v[0] + row[1] * v[1] + row[2] * v[2]);
-    outLat[i] = Math.atan2(r[2], Math.hypot(r[0], r[1])) * DEG;
-    outLon[i] = Math.atan2(r[1], r[0]) * DEG;
+    const moved = rotatePointNaively(model, table.plateId[i], 0.5 * (scale.baseMa[s] + scale.topMa[s]), table.lat[i], table.lon[i]);
+    outLat[i] = moved.lat;
+    outLon[i] = moved.lon;
   }
 }
 

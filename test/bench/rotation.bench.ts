@@ -6,7 +6,7 @@
 // Run: npx tsx test/bench/rotation.bench.ts (or `npm run bench rotation`).
 import { reconstructPointsInto, type RotationModel } from '../../src/rotation';
 import { createSeededRandom } from '../../src/time/seeded-random';
-import { demoModel } from './demo-model';
+import { demoModel, rotatePointNaively } from './rotation-fixtures';
 import { report, time } from './measure';
 
 const POINTS = 1_000_000;
@@ -34,16 +34,7 @@ function points(plates: readonly number[]): { lat: Float64Array; lon: Float64Arr
 /** The obvious way: per point, ask the model, build the matrix, make objects, use Math. */
 function reference(model: RotationModel, rows: ReturnType<typeof points>, ages: Float64Array | number, outLat: Float64Array, outLon: Float64Array): void {
   for (let i = 0; i < POINTS; i++) {
-    const [w, x, y, z] = model.rotationAt(rows.plateId[i], typeof ages === 'number' ? ages : ages[i]);
-    const m = [
-      [1 - 2 * (y * y + z * z), 2 * (x * y - w * z), 2 * (x * z + w * y)],
-      [2 * (x * y + w * z), 1 - 2 * (x * x + z * z), 2 * (y * z - w * x)],
-      [2 * (x * z - w * y), 2 * (y * z + w * x), 1 - 2 * (x * x + y * y)],
-    ];
-    const p = { phi: rows.lat[i] / DEG, lambda: rows.lon[i] / DEG };
-    const v = [Math.cos(p.phi) * Math.cos(p.lambda), Math.cos(p.phi) * Math.sin(p.lambda), Math.sin(p.phi)];
-    const r = m.map((row) => row[0] * v[0] + row[1] * v[1] + row[2] * v[2]);
-    const moved = { lat: Math.atan2(r[2], Math.hypot(r[0], r[1])) * DEG, lon: Math.atan2(r[1], r[0]) * DEG };
+    const moved = rotatePointNaively(model, rows.plateId[i], typeof ages === 'number' ? ages : ages[i], rows.lat[i], rows.lon[i]);
     outLat[i] = moved.lat;
     outLon[i] = moved.lon;
   }
