@@ -51,6 +51,10 @@ export interface AnalysisResult {
   readonly exclusions: Exclusions;
   /** True when `collections` counts distinct positions because the table has no collection ids. */
   readonly collectionsArePositions: boolean;
+  /** Per slice, the distinct palaeopositions (degrees) the footprint was measured over. */
+  readonly places: { readonly lat: readonly Float64Array[]; readonly lon: readonly Float64Array[] };
+  /** Placed rows grouped by slice: rows of slice s are order[start[s]] … order[start[s + 1] − 1]. */
+  readonly rowsBySlice: { readonly order: Uint32Array; readonly start: Uint32Array };
 }
 
 /** The whole computation from accepted occurrences to per-slice footprint and gridded coverage. */
@@ -115,6 +119,8 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     placement,
     exclusions,
     collectionsArePositions,
+    places: { lat: places.lat, lon: places.lon },
+    rowsBySlice: { order, start },
   };
 }
 

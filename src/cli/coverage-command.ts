@@ -4,15 +4,15 @@ import { analyse } from '../analysis';
 import { cellsCsv } from '../export/cells-csv';
 import { cellsGeoJson } from '../export/cells-geojson';
 import { rejectsCsv } from '../export/rejects-csv';
-import { sessionJson, SESSION_FORMAT, SESSION_FORMAT_VERSION, type Session } from '../export/session';
+import { sessionJson, sessionSummary, SESSION_FORMAT, SESSION_FORMAT_VERSION, type Session } from '../export/session';
 import { slicesCsv } from '../export/slices-csv';
 import { parseGridName } from '../grid';
-import type { OccurrenceTable } from '../table/occurrence-table';
+import { oldestAge } from '../table/oldest-age';
 import { findChartInterval, parseAssignRule, parseBinsOption } from '../time';
 import type { TimeScale } from '../time/time-scale';
 import { parseCoverageOptions } from './coverage-options';
 import { resolveSession, sessionInput } from './coverage-session';
-import { excludedRows } from './excluded-rows';
+import { excludedRowsOfFile } from './excluded-rows';
 import { fileDigest } from './file-digest';
 import { progressReporter } from './progress';
 import { readRotationFile } from './read-rotation-file';
@@ -57,7 +57,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
   const scale: TimeScale = userScale ?? parseBinsOption(options.bins, oldestAge(read.table));
   const placement = { rotateAt: options.rotateAt, preferModel: options.preferModel };
   const result = analyse(read.table, { scale, rule, grid, rotation: model, placement });
-  const rejects = [...read.rejects, ...(await excludedRows(input, read.table, result.exclusions, result.placement, model, options.rotateAt))];
+  const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, read.table, result.exclusions, result.placement, model, options.rotateAt))];
 
   const outFolder = options.out;
   const session: Session = {
@@ -73,17 +73,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
       bins: binsFile === undefined ? options.bins : 'file', assign: options.assign, seed: options.seed, grid: grid.name, map: options.map,
       rotateAt: options.rotateAt, preferModel: options.preferModel, beyondModel: options.beyondModel,
     },
-    summary: {
-      rowsRead: read.rowsRead,
-      accepted: read.table.count,
-      rejectedOnReading: read.rejects.length,
-      excludedFromSlices: result.exclusions.rows.length,
-      placedFromTable: result.placement.fromTable,
-      placedByModel: result.placement.fromModel,
-      clampedByModel: result.placement.clamped,
-      slices: result.slices.length,
-      collectionsArePositions: result.collectionsArePositions,
-    },
+    summary: sessionSummary({ rowsRead: read.rowsRead, accepted: read.table.count, rejectedOnReading: read.rejects.length }, result),
   };
   const written = await writeResults(
     outFolder,
@@ -100,13 +90,6 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
     printSummary({ rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result, model, written, elapsedMs: performance.now() - started });
   }
   return 0;
-}
-
-/** Oldest max_ma of the accepted rows (0 for an empty table). */
-export function oldestAge(table: OccurrenceTable): number {
-  let oldest = 0;
-  for (let i = 0; i < table.count; i++) if (table.maxMa[i] > oldest) oldest = table.maxMa[i];
-  return oldest;
 }
 
 /** Size in bytes, or 0 when the file cannot be read (the reader then says why). */

@@ -7,8 +7,8 @@ import { rejectsCsv } from '../export/rejects-csv';
 import { collectExclusions, exclusionStatus, EXCLUSION_REASONS, placeOccurrences, ROTATE_AT, type Placement } from '../placement';
 import { normaliseHeader, type Delimiter, type OccurrenceTable } from '../table/index';
 import { assignSlices, findChartInterval, parseAssignRule } from '../time';
-import { oldestAge } from './coverage-command';
-import { excludedRows } from './excluded-rows';
+import { oldestAge } from '../table/oldest-age';
+import { excludedRowsOfFile } from './excluded-rows';
 import { readTableFile, scanRecordsFile } from './read-table-file';
 import type { ReconstructContext } from './reconstruct-command';
 import { countBy, modelNotes } from './summary';
@@ -34,7 +34,7 @@ export async function reconstructTable(context: ReconstructContext): Promise<voi
   const assignment = assignSlices(table.maxMa, table.minMa, scale, parseAssignRule(options.assign, options.seed));
   const placement = placeOccurrences(table, assignment, scale, model, { rotateAt: options.rotateAt, preferModel: false, modelOnly: true });
   const exclusions = collectExclusions(assignment, placement, assignment.slice);
-  const rejects = [...read.rejects, ...(await excludedRows(input, table, exclusions, placement, model, options.rotateAt))];
+  const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, table, exclusions, placement, model, options.rotateAt))];
 
   const extension = extname(input);
   const [tablePath, rejectsPath] = await prepareTargets(options.out, [`${basename(input, extension)}-reconstructed${extension}`, 'rejects.csv'], context.inputs);

@@ -1,3 +1,4 @@
+import type { AnalysisResult } from '../analysis';
 /** Format marker and version of session files; bump the version when the shape changes. */
 export const SESSION_FORMAT = 'driftgrid-session';
 /** 2 added the rotation model (inputs.rotation, settings.rotateAt/preferModel/beyondModel); an
@@ -38,6 +39,21 @@ export interface Session {
   readonly settings: SessionSettings;
   /** What the run found, for the record; not read back. */
   readonly summary: Readonly<Record<string, unknown>>;
+}
+
+/** What a run found, as the session file records it. */
+export function sessionSummary(read: { readonly rowsRead: number; readonly accepted: number; readonly rejectedOnReading: number }, result: AnalysisResult): Record<string, unknown> {
+  return {
+    rowsRead: read.rowsRead,
+    accepted: read.accepted,
+    rejectedOnReading: read.rejectedOnReading,
+    excludedFromSlices: result.exclusions.rows.length,
+    placedFromTable: result.placement.fromTable,
+    placedByModel: result.placement.fromModel,
+    clampedByModel: result.placement.clamped,
+    slices: result.slices.length,
+    collectionsArePositions: result.collectionsArePositions,
+  };
 }
 
 /** Session file text: stable key order and 2-space indentation so that runs can be diffed. */

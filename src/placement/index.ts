@@ -12,3 +12,4 @@ export { reconstructFeaturesAt } from './reconstruct-features';
 export type { ReconstructedFeature, ReconstructionNote, SliceTarget } from './reconstruct-features';
 export { EXCLUSION_FIELDS, EXCLUSION_REASONS, collectExclusions, exclusionStatus } from './exclusions';
 export type { Exclusions } from './exclusions';
+export { excludedLines, excludedRows } from './excluded-rows';

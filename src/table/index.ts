@@ -21,3 +21,4 @@ export {
 export type { ResolveInterval } from './occurrence-row';
 export { createOccurrenceReader } from './occurrence-reader';
 export type { OccurrenceReader, OccurrenceReaderOptions, OccurrenceReadResult } from './occurrence-reader';
+export { oldestAge } from './oldest-age';

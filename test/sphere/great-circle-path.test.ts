@@ -1,0 +1,62 @@
+import { geoDistance, geoInterpolate } from 'd3-geo';
+import { describe, expect, it } from 'vitest';
+import { appendGreatCircleArc, continuousLongitude } from '../../src/sphere/great-circle-path';
+
+const RAD = Math.PI / 180;
+
+/** Angular distance in degrees between [lon, lat] points, by d3-geo (the outside reference). */
+function gap(a: [number, number], b: [number, number]): number {
+  return geoDistance(a, b) / RAD;
+}
+
+describe('appendGreatCircleArc', () => {
+  it('puts every vertex on the great circle d3-geo interpolates between the ends', () => {
+    const out: number[] = [];
+    appendGreatCircleArc(10, -20, 55, 140, 1, -20, out);
+    const along = geoInterpolate([-20, 10], [140, 55]);
+    const n = out.length / 2;
+    for (let k = 0; k < n; k++) {
+      const expected = along((k + 1) / n);
+      expect(gap([out[2 * k], out[2 * k + 1]], expected)).toBeLessThan(1e-9);
+    }
+  });
+
+  it('keeps each step no longer than the step asked for and ends exactly at the end point', () => {
+    const out: number[] = [];
+    appendGreatCircleArc(-40, 170, 30, -150, 2, 170, out);
+    let previous: [number, number] = [170, -40];
+    for (let k = 0; k < out.length; k += 2) {
+      const point: [number, number] = [out[k], out[k + 1]];
+      expect(gap(previous, point)).toBeLessThanOrEqual(2 + 1e-9);
+      previous = point;
+    }
+    expect(out[out.length - 1]).toBe(30);
+    expect(out[out.length - 2]).toBe(210); // −150 continued past the antimeridian from 170
+  });
+
+  it('writes longitudes that never jump by more than 180 degrees between vertices', () => {
+    const out: number[] = [];
+    appendGreatCircleArc(0, 179, 0, -179, 0.5, 179, out);
+    let previous = 179;
+    for (let k = 0; k < out.length; k += 2) {
+      expect(Math.abs(out[k] - previous)).toBeLessThan(180);
+      previous = out[k];
+    }
+    expect(previous).toBeCloseTo(181, 12);
+  });
+
+  it('writes the end point alone for antipodal ends, which have no unique arc', () => {
+    const out: number[] = [];
+    appendGreatCircleArc(0, 0, 0, 180, 1, 0, out);
+    expect(out).toEqual([180, 0]);
+  });
+});
+
+describe('continuousLongitude', () => {
+  it('moves a longitude by whole turns to within 180 degrees of the previous one', () => {
+    expect(continuousLongitude(-170, 175)).toBe(190);
+    expect(continuousLongitude(170, -175)).toBe(-190);
+    expect(continuousLongitude(20, 10)).toBe(20);
+    expect(continuousLongitude(10, 730)).toBe(730);
+  });
+});

@@ -1,0 +1,52 @@
+/** Exports: the command line's files (written by the worker) and the current figures. */
+import { LitElement, css, html, nothing } from 'lit';
+import { EXPORT_FILES } from '../protocol';
+import type { AppState } from '../state/app-state';
+import type { WorkbenchActions } from '../state/workbench-actions';
+import { panelStyles } from './shared-styles';
+
+export const FIGURES = ['map', 'curves', 'latitude'] as const;
+export type Figure = (typeof FIGURES)[number];
+export type FigureFormat = 'svg' | 'png';
+
+const FIGURE_LABELS: Readonly<Record<Figure, string>> = { map: 'Map', curves: 'Curves', latitude: 'Latitude panel' };
+
+export class DgExportMenu extends LitElement {
+  static override properties = { state: { attribute: false }, actions: { attribute: false } };
+  declare state: AppState | undefined;
+  declare actions: WorkbenchActions | undefined;
+
+  constructor() {
+    super();
+    this.state = undefined;
+    this.actions = undefined;
+  }
+
+  static override styles = [panelStyles, css`
+    .buttons { display: flex; flex-wrap: wrap; gap: 0.3rem; margin-bottom: 0.4rem; }
+    button { font-size: 0.85em; }
+  `];
+
+  private figure(figure: Figure, format: FigureFormat): void {
+    this.dispatchEvent(new CustomEvent('figure-export', { detail: { figure, format }, bubbles: true, composed: true }));
+  }
+
+  override render() {
+    if (this.state?.view === undefined) return nothing;
+    const disabled = this.state.busy !== undefined;
+    return html`
+      <h2>Export</h2>
+      <div class="buttons" role="group" aria-label="Result files">
+        ${EXPORT_FILES.map((file) => html`<button ?disabled=${disabled} data-export=${file} @click=${() => void this.actions?.exportFile(file)}>${file}</button>`)}
+      </div>
+      <div class="buttons" role="group" aria-label="Figures of the current slice">
+        ${Object.entries(FIGURE_LABELS).map(([figure, label]) => html`
+          <button data-figure="${figure}-svg" @click=${() => this.figure(figure as Figure, 'svg')}>${label} SVG</button>
+          <button data-figure="${figure}-png" @click=${() => this.figure(figure as Figure, 'png')}>${label} PNG</button>`)}
+      </div>
+      <p class="hint">session.json records the settings and the inputs' SHA-256; open it here or pass it to the command line to repeat the run.</p>`;
+  }
+}
+
+customElements.define('dg-export-menu', DgExportMenu);
+declare global { interface HTMLElementTagNameMap { 'dg-export-menu': DgExportMenu } }

@@ -1,0 +1,123 @@
+/**
+ * Bringing data: the occurrence table (with a mapping step that shows the detected columns and
+ * the first rows), the optional inputs, and session files. All names from files are shown as text.
+ */
+import { LitElement, css, html, nothing } from 'lit';
+import { POLE_TABLE_COLUMNS } from '../../src/rotation';
+import { BIN_COLUMNS } from '../../src/time';
+import type { ExtraRole } from '../protocol';
+import type { AppState } from '../state/app-state';
+import type { WorkbenchActions } from '../state/workbench-actions';
+import { panelStyles } from './shared-styles';
+
+const EXTRA_INPUTS: ReadonlyArray<{ role: ExtraRole; label: string; accept: string; hint: string }> = [
+  { role: 'rotation', label: 'Pole table (rotation model)', accept: '.csv,.tsv,.txt', hint: POLE_TABLE_COLUMNS.join(', ') },
+  { role: 'polygons', label: 'Base polygons', accept: '.geojson,.json', hint: 'GeoJSON polygons with a plate_id property' },
+  { role: 'indicators', label: 'Climate indicators', accept: '.csv,.tsv,.txt', hint: 'a table like the occurrence table with a kind column' },
+  { role: 'bins', label: 'Own time bins', accept: '.csv,.tsv,.txt', hint: BIN_COLUMNS.join(', ') },
+];
+
+export class DgImportPanel extends LitElement {
+  static override properties = { state: { attribute: false }, actions: { attribute: false }, mapping: { state: true } };
+  declare state: AppState | undefined;
+  declare actions: WorkbenchActions | undefined;
+  /** The user's column choices in the mapping step: field → header ('' = none). */
+  declare mapping: Record<string, string>;
+  /** The preview the mapping belongs to. */
+  private mappingFor: unknown;
+
+  constructor() {
+    super();
+    this.state = undefined;
+    this.actions = undefined;
+    this.mapping = {};
+  }
+
+  static override styles = [panelStyles, css`
+    .mapping { margin-top: 0.5rem; padding: 0.5rem; border: 1px solid #9aa5b0; border-radius: 4px; background: #fff; }
+    .scroll { overflow: auto; max-height: 12rem; max-width: 100%; }
+    .fields { display: grid; grid-template-columns: auto 1fr; gap: 0.15rem 0.5rem; align-items: center; }
+    .buttons { display: flex; gap: 0.5rem; margin-top: 0.5rem; }
+    input[type='file'] { max-width: 100%; font-size: 0.85em; }
+    .loaded { font-size: 0.85em; color: #2b4a2b; overflow-wrap: anywhere; }
+  `];
+
+  override willUpdate(): void {
+    const preview = this.state?.pendingImport?.preview;
+    if (preview !== undefined && preview !== this.mappingFor) {
+      this.mappingFor = preview;
+      this.mapping = { ...preview.detected };
+    }
+  }
+
+  private picked(event: Event, use: (file: File) => void): void {
+    const input = event.target as HTMLInputElement;
+    const file = input.files?.[0];
+    if (file !== undefined) use(file);
+    input.value = ''; // picking the same file again must work
+  }
+
+  private confirm(): void {
+    // Only the user's changes are explicit: columns found by name are found again by the reader.
+    const detected = this.state?.pendingImport?.preview.detected ?? {};
+    const chosen = Object.fromEntries(Object.entries(this.mapping).filter(([field, header]) => header !== '' && detected[field] !== header));
+    void this.actions?.confirmImport(chosen);
+  }
+
+  override render() {
+    const state = this.state;
+    if (state === undefined) return nothing;
+    const table = state.table;
+    return html`
+      <h2>Data</h2>
+      <label>Occurrence table
+        <input type="file" name="occurrences" accept=".csv,.tsv,.txt" @change=${(e: Event) => this.picked(e, (f) => void this.actions?.pickTable(f))}>
+      </label>
+      ${table === undefined ? nothing : html`<div class="loaded" data-field="table-summary">${table.name}: ${table.rowsRead.toLocaleString('en')} rows read,
+        ${table.accepted.toLocaleString('en')} accepted, ${table.rejects.length.toLocaleString('en')} rejected</div>`}
+      ${state.pendingImport === undefined ? nothing : this.renderMapping(state.pendingImport)}
+      <details>
+        <summary>Optional inputs</summary>
+        ${EXTRA_INPUTS.map((x) => html`
+          <label>${x.label}
+            <input type="file" name=${x.role} accept=${x.accept} @change=${(e: Event) => this.picked(e, (f) => void this.actions?.loadExtra(x.role, f))}>
+          </label>
+          <div class="hint">${x.hint}</div>
+          ${state.extras[x.role] === undefined ? nothing : html`<div class="loaded">${state.extras[x.role]?.name}: ${state.extras[x.role]?.description}</div>`}`)}
+      </details>
+      <label>Open a session file
+        <input type="file" name="session" accept=".json" @change=${(e: Event) => this.picked(e, (f) => void this.actions?.openSession(f))}>
+      </label>`;
+  }
+
+  private renderMapping(pending: NonNullable<AppState['pendingImport']>) {
+    const { preview } = pending;
+    return html`
+      <section class="mapping" aria-label="Columns of ${preview.name}">
+        <h2>Columns of ${preview.name}</h2>
+        <p class="hint">Check which column feeds each field. Columns found by their name are read unless you pick another column for that field.</p>
+        ${preview.problem === undefined ? nothing : html`<p class="problem" role="alert">${preview.problem}</p>`}
+        <div class="fields">
+          ${preview.fields.map((field) => html`
+            <label for="map-${field}">${field}</label>
+            <select id="map-${field}" name="map-${field}" @change=${(e: Event) => (this.mapping = { ...this.mapping, [field]: (e.target as HTMLSelectElement).value })}>
+              <option value="" ?selected=${(this.mapping[field] ?? '') === ''}>none</option>
+              ${preview.header.map((h) => html`<option value=${h} ?selected=${this.mapping[field] === h}>${h}</option>`)}
+            </select>`)}
+        </div>
+        <div class="scroll">
+          <table aria-label="First rows of ${preview.name}">
+            <thead><tr>${preview.header.map((h) => html`<th scope="col">${h}</th>`)}</tr></thead>
+            <tbody>${preview.rows.map((row) => html`<tr>${row.map((cell) => html`<td>${cell}</td>`)}</tr>`)}</tbody>
+          </table>
+        </div>
+        <div class="buttons">
+          <button @click=${this.confirm}>Read the table</button>
+          <button @click=${() => this.actions?.dismissImport()}>Cancel</button>
+        </div>
+      </section>`;
+  }
+}
+
+customElements.define('dg-import-panel', DgImportPanel);
+declare global { interface HTMLElementTagNameMap { 'dg-import-panel': DgImportPanel } }

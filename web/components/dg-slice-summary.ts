@@ -1,0 +1,65 @@
+/**
+ * The current slice's numbers (the same as its row of slices.csv) and the cautions that go with
+ * them: no hull and why, a hull close to a hemisphere, few positions.
+ */
+import { LitElement, css, html, nothing } from 'lit';
+import type { AnalysisView } from '../protocol';
+import { EARTH_RADIUS_KM } from '../../src/sphere';
+import { panelStyles } from './shared-styles';
+
+/** Below this many distinct positions every footprint measure is noisy (our rule of thumb; README "Read the numbers with care"). */
+export const FEW_POSITIONS = 10;
+/** A hull covering more than this share of the sphere is governed by a few outlying sites. */
+export const WIDE_HULL_SHARE = 0.35;
+const SPHERE_KM2 = 4 * Math.PI * EARTH_RADIUS_KM ** 2;
+
+const number = (v: number, decimals = 0): string =>
+  Number.isFinite(v) ? v.toLocaleString('en', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }) : '—';
+
+export class DgSliceSummary extends LitElement {
+  static override properties = { view: { attribute: false }, slice: { type: Number } };
+  declare view: AnalysisView | undefined;
+  declare slice: number;
+
+  constructor() {
+    super();
+    this.view = undefined;
+    this.slice = 0;
+  }
+
+  static override styles = [panelStyles, css`
+    dl { display: grid; grid-template-columns: auto auto; gap: 0.1rem 0.8rem; margin: 0; }
+    dt { color: #4a5560; }
+    dd { margin: 0; text-align: right; font-variant-numeric: tabular-nums; }
+    ul { margin: 0.4rem 0 0; padding-left: 1.1rem; font-size: 0.85em; color: #6b3a00; }
+  `];
+
+  override render() {
+    const s = this.view?.slices[this.slice];
+    if (this.view === undefined || s === undefined) return nothing;
+    const collections = this.view.collectionsArePositions ? 'Distinct places' : 'Collections';
+    const cautions: string[] = [];
+    if (s.occurrences === 0) cautions.push('No occurrences in this slice.');
+    else if (s.positions < FEW_POSITIONS) cautions.push(`Only ${s.positions} distinct places: every footprint measure is noisy here.`);
+    if (s.hullNote !== undefined && s.occurrences > 0) cautions.push(`No convex hull: ${s.hullNote}.`);
+    if (Number.isFinite(s.hullKm2) && s.hullKm2 > WIDE_HULL_SHARE * SPHERE_KM2) {
+      cautions.push('The hull covers much of a hemisphere: a few outlying sites govern its area; compare with cells and tree length.');
+    }
+    return html`
+      <h2>Slice ${this.slice + 1} of ${this.view.slices.length}</h2>
+      <p><strong data-field="name">${s.name}</strong> <span class="hint">${s.baseMa}–${s.topMa} Ma</span></p>
+      <dl>
+        <dt>Occurrences</dt><dd data-field="occurrences">${number(s.occurrences)}</dd>
+        <dt>${collections}</dt><dd data-field="collections">${number(s.collections)}</dd>
+        <dt>Taxa</dt><dd data-field="taxa">${number(s.taxa)}</dd>
+        <dt>Occupied cells</dt><dd data-field="cells">${number(s.cells)}</dd>
+        <dt>Hull area, km²</dt><dd data-field="hull_km2">${number(s.hullKm2)}</dd>
+        <dt>Spanning tree, km</dt><dd data-field="mst_km">${number(s.mstKm)}</dd>
+        <dt>Latitude span, °</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
+      </dl>
+      ${cautions.length === 0 ? nothing : html`<ul aria-label="Cautions">${cautions.map((c) => html`<li>${c}</li>`)}</ul>`}`;
+  }
+}
+
+customElements.define('dg-slice-summary', DgSliceSummary);
+declare global { interface HTMLElementTagNameMap { 'dg-slice-summary': DgSliceSummary } }

@@ -1,0 +1,152 @@
+/**
+ * The time strip: the chosen bins from old (left) to young (right), each as wide as it is long,
+ * tinted by chart period, with the current slice marked. A slider for keyboard and screen
+ * readers; drag or click to move; a play button steps through the slices.
+ */
+import { LitElement, css, html, svg } from 'lit';
+import type { SliceMetrics } from '../../src/analysis';
+import { panelStyles } from './shared-styles';
+
+/** Muted tints for alternating chart periods (ours; labels carry the names, colour only separates). */
+const PERIOD_TINTS = ['#d9e4ec', '#e9e1d2', '#dfe8d8', '#e8dbe4', '#d8e6e4', '#ece6d0'];
+const PLAY_STEP_MS = 700;
+const HEIGHT = 46;
+
+export class DgTimeStrip extends LitElement {
+  static override properties = { slices: { attribute: false }, periods: { attribute: false }, slice: { type: Number }, playing: { state: true }, width: { state: true } };
+  declare slices: readonly SliceMetrics[];
+  declare periods: readonly string[];
+  declare slice: number;
+  declare playing: boolean;
+  /** Drawn width in CSS pixels, so that labels are not stretched. */
+  declare width: number;
+  private readonly resizer = new ResizeObserver((entries) => (this.width = Math.max(100, entries[0].contentRect.width)));
+  private timer: ReturnType<typeof setInterval> | undefined;
+  private dragging = false;
+
+  constructor() {
+    super();
+    this.slices = [];
+    this.periods = [];
+    this.slice = 0;
+    this.playing = false;
+    this.width = 1000;
+  }
+
+  static override styles = [panelStyles, css`
+    .row { display: flex; gap: 0.5rem; align-items: center; }
+    .strip { flex: 1; height: ${HEIGHT}px; touch-action: none; cursor: pointer; border-radius: 3px; }
+    svg { width: 100%; height: 100%; display: block; }
+    .current { font-weight: 600; min-width: 16rem; }
+    text { font-size: 10px; fill: #3a444d; pointer-events: none; }
+  `];
+
+  override firstUpdated(): void {
+    const strip = this.renderRoot.querySelector('.strip');
+    if (strip !== null) this.resizer.observe(strip);
+  }
+
+  override disconnectedCallback(): void {
+    super.disconnectedCallback();
+    this.resizer.disconnect();
+    this.stop();
+  }
+
+  private get span(): { old: number; young: number } {
+    const n = this.slices.length;
+    return n === 0 ? { old: 1, young: 0 } : { old: this.slices[0].baseMa, young: this.slices[n - 1].topMa };
+  }
+
+  private select(slice: number): void {
+    const n = this.slices.length;
+    const next = Math.min(n - 1, Math.max(0, slice));
+    if (n === 0 || next === this.slice) return;
+    this.dispatchEvent(new CustomEvent('slice-select', { detail: { slice: next }, bubbles: true, composed: true }));
+  }
+
+  /** The slice under a pointer's x, or the nearest one where bins leave gaps. */
+  private sliceAt(event: PointerEvent): number {
+    const box = (event.currentTarget as HTMLElement).getBoundingClientRect();
+    const { old, young } = this.span;
+    const age = old - ((event.clientX - box.left) / box.width) * (old - young);
+    let best = 0, gap = Infinity;
+    this.slices.forEach((s, k) => {
+      const d = age > s.baseMa ? age - s.baseMa : age < s.topMa ? s.topMa - age : 0;
+      if (d < gap) { gap = d; best = k; }
+    });
+    return best;
+  }
+
+  private onKey(event: KeyboardEvent): void {
+    const moves: Record<string, number> = { ArrowLeft: -1, ArrowDown: -1, ArrowRight: 1, ArrowUp: 1, PageDown: -5, PageUp: 5 };
+    if (event.key === 'Home') this.select(0);
+    else if (event.key === 'End') this.select(this.slices.length - 1);
+    else if (event.key in moves) this.select(this.slice + moves[event.key]);
+    else return;
+    event.preventDefault();
+    event.stopPropagation(); // the page's own Left/Right handler would step twice
+  }
+
+  private togglePlay(): void {
+    if (this.playing) this.stop();
+    else {
+      if (this.slice >= this.slices.length - 1) this.select(0);
+      this.playing = true;
+      this.timer = setInterval(() => {
+        if (this.slice >= this.slices.length - 1) this.stop();
+        else this.select(this.slice + 1);
+      }, PLAY_STEP_MS);
+    }
+  }
+
+  private stop(): void {
+    clearInterval(this.timer);
+    this.timer = undefined;
+    this.playing = false;
+  }
+
+  override render() {
+    const n = this.slices.length;
+    const current = this.slices[this.slice];
+    const { old, young } = this.span;
+    const w = this.width;
+    const x = (ma: number) => ((old - ma) / (old - young || 1)) * w;
+    const periodIndex = new Map<string, number>();
+    for (const p of this.periods) if (!periodIndex.has(p)) periodIndex.set(p, periodIndex.size);
+    const valueText = current === undefined ? 'no slices' : `${current.name}, ${current.baseMa}–${current.topMa} Ma, slice ${this.slice + 1} of ${n}`;
+    return html`
+      <div class="row">
+        <button @click=${this.togglePlay} aria-label=${this.playing ? 'Stop stepping through slices' : 'Play: step through slices'}>${this.playing ? '■ Stop' : '▶ Play'}</button>
+        <div class="strip" role="slider" tabindex="0" aria-label="Time slice" aria-valuemin="1" aria-valuemax=${n} aria-valuenow=${this.slice + 1}
+          aria-valuetext=${valueText} @keydown=${this.onKey}
+          @pointerdown=${(e: PointerEvent) => { this.dragging = true; (e.currentTarget as HTMLElement).setPointerCapture(e.pointerId); this.select(this.sliceAt(e)); }}
+          @pointermove=${(e: PointerEvent) => { if (this.dragging) this.select(this.sliceAt(e)); }}
+          @pointerup=${() => (this.dragging = false)}>
+          <svg viewBox="0 0 ${w} ${HEIGHT}" aria-hidden="true">
+            ${this.slices.map((s, k) => svg`<rect x=${x(s.baseMa)} y="14" width=${Math.max(0.5, x(s.topMa) - x(s.baseMa))} height=${HEIGHT - 14}
+              fill=${PERIOD_TINTS[(periodIndex.get(this.periods[k]) ?? 0) % PERIOD_TINTS.length]} stroke="#ffffff" stroke-width="0.6"></rect>`)}
+            ${this.periodLabels(x)}
+            ${current === undefined ? null : svg`<rect x=${x(current.baseMa) - 1} y="12" width=${Math.max(3, x(current.topMa) - x(current.baseMa)) + 2} height=${HEIGHT - 12}
+              fill="none" stroke="#0b2a45" stroke-width="2.5" vector-effect="non-scaling-stroke"></rect>`}
+          </svg>
+        </div>
+        <span class="current" aria-live="polite">${current === undefined ? '' : html`${current.name} <span class="hint">${current.baseMa}–${current.topMa} Ma</span>`}</span>
+      </div>`;
+  }
+
+  /** One label per run of slices in the same period, above the strip. */
+  private periodLabels(x: (ma: number) => number) {
+    const labels = [];
+    for (let k = 0; k < this.slices.length;) {
+      let end = k;
+      while (end + 1 < this.slices.length && this.periods[end + 1] === this.periods[k]) end++;
+      const from = x(this.slices[k].baseMa), to = x(this.slices[end].topMa);
+      if (to - from > 40 && this.periods[k] !== '') labels.push(svg`<text x=${(from + to) / 2} y="10" text-anchor="middle">${this.periods[k]}</text>`);
+      k = end + 1;
+    }
+    return labels;
+  }
+}
+
+customElements.define('dg-time-strip', DgTimeStrip);
+declare global { interface HTMLElementTagNameMap { 'dg-time-strip': DgTimeStrip } }

@@ -1,0 +1,2 @@
+// The workbench's entry: one element holds the whole page.
+import './components/dg-app';

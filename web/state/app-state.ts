@@ -1,0 +1,71 @@
+/** Everything the page shows, in one object (see Store). */
+import type { AnalysisView, ExtraRole, ExtraSummary, FrameSettings, Measure, TablePreview, TableSummary } from '../protocol';
+import { DEFAULT_SETTINGS } from '../protocol';
+import { DEFAULT_LAYERS, type LayerVisibility, type MapView } from './view-options';
+
+export interface Busy {
+  readonly label: string;
+  /** 0…1, or undefined while the length of the work is unknown. */
+  readonly fraction: number | undefined;
+  /** Worker request a cancel button would stop. */
+  readonly cancelId?: number;
+}
+
+/** A picked table waiting for the user to confirm its columns. */
+export interface PendingImport {
+  readonly file: File;
+  readonly preview: TablePreview;
+}
+
+export interface CellFocus {
+  readonly slice: number;
+  /** Index into view.cells. */
+  readonly entry: number;
+  /** Taxa in the cell, once the worker has answered. */
+  readonly taxa?: readonly string[];
+}
+
+export const CURVE_SERIES = ['occurrences', 'collections', 'taxa', 'cells', 'hullKm2', 'mstKm', 'latSpan'] as const;
+export type CurveSeries = (typeof CURVE_SERIES)[number];
+
+export interface AppState {
+  readonly phase: 'loading' | 'ready' | 'error';
+  readonly busy: Busy | undefined;
+  /** The last problem to tell the user about (cleared by the next successful action). */
+  readonly problem: string | undefined;
+  readonly table: TableSummary | undefined;
+  readonly extras: Readonly<Partial<Record<ExtraRole, ExtraSummary>>>;
+  readonly pendingImport: PendingImport | undefined;
+  readonly settings: FrameSettings;
+  readonly measure: Measure;
+  readonly view: AnalysisView | undefined;
+  readonly slice: number;
+  readonly mapView: MapView;
+  readonly layers: LayerVisibility;
+  readonly showAllPoints: boolean;
+  readonly curveSeries: readonly CurveSeries[];
+  readonly normaliseCurves: boolean;
+  /** False when the browser gives no WebGL: the equal-area view stands in for the globe. */
+  readonly webgl: boolean;
+  readonly cell: CellFocus | undefined;
+}
+
+export const INITIAL_STATE: AppState = {
+  phase: 'loading',
+  busy: undefined,
+  problem: undefined,
+  table: undefined,
+  extras: {},
+  pendingImport: undefined,
+  settings: DEFAULT_SETTINGS,
+  measure: 'occurrences',
+  view: undefined,
+  slice: 0,
+  mapView: 'globe',
+  layers: DEFAULT_LAYERS,
+  showAllPoints: false,
+  curveSeries: ['occurrences', 'taxa', 'cells', 'hullKm2'],
+  normaliseCurves: false,
+  webgl: true,
+  cell: undefined,
+};

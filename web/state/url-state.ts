@@ -1,0 +1,88 @@
+/**
+ * The view in the page address (after #), so that it can be bookmarked and reloaded:
+ * settings, measure, slice (by name), map view, layers and curves. Unknown or malformed values
+ * are ignored in favour of the defaults, and say so through `ignored`.
+ */
+import { DEFAULT_SETTINGS, MEASURES, type FrameSettings, type Measure } from '../protocol';
+import { CURVE_SERIES, type CurveSeries } from './app-state';
+import { DEFAULT_LAYERS, MAP_VIEWS, type LayerVisibility, type MapView } from './view-options';
+
+export interface UrlState {
+  readonly settings: FrameSettings;
+  readonly measure: Measure;
+  readonly sliceName: string | undefined;
+  readonly mapView: MapView | undefined;
+  readonly layers: LayerVisibility;
+  readonly curveSeries: readonly CurveSeries[] | undefined;
+  readonly normaliseCurves: boolean;
+}
+
+const LAYER_KEYS = Object.keys(DEFAULT_LAYERS) as (keyof LayerVisibility)[];
+
+export function encodeUrlState(state: UrlState): string {
+  const p = new URLSearchParams();
+  const s = state.settings;
+  p.set('bins', s.bins);
+  p.set('assign', s.assign);
+  if (s.assign === 'random') p.set('seed', String(s.seed));
+  p.set('grid', s.grid);
+  if (s.rotateAt !== DEFAULT_SETTINGS.rotateAt) p.set('rotate-at', s.rotateAt);
+  if (s.preferModel) p.set('prefer-model', '1');
+  if (s.beyondModel !== DEFAULT_SETTINGS.beyondModel) p.set('beyond-model', s.beyondModel);
+  p.set('measure', state.measure);
+  if (state.sliceName !== undefined) p.set('slice', state.sliceName);
+  if (state.mapView !== undefined) p.set('map', state.mapView);
+  p.set('layers', LAYER_KEYS.filter((k) => state.layers[k]).join(','));
+  if (state.curveSeries !== undefined) p.set('curves', state.curveSeries.join(','));
+  if (state.normaliseCurves) p.set('normalise', '1');
+  return p.toString();
+}
+
+export function decodeUrlState(hash: string): { state: UrlState; ignored: string[] } {
+  const p = new URLSearchParams(hash.replace(/^#/, ''));
+  const ignored: string[] = [];
+  const pick = <T extends string>(key: string, allowed: (v: string) => v is T, fallback: T): T => {
+    const value = p.get(key);
+    if (value === null) return fallback;
+    if (allowed(value)) return value;
+    ignored.push(`${key}=${value}`);
+    return fallback;
+  };
+  const isText = (v: string): v is string => v.length > 0 && v.length <= 200;
+  const seedText = p.get('seed');
+  const seed = seedText !== null && /^\d{1,9}$/.test(seedText) ? Number(seedText) : DEFAULT_SETTINGS.seed;
+  if (seedText !== null && seed === DEFAULT_SETTINGS.seed && seedText !== String(seed)) ignored.push(`seed=${seedText}`);
+  const settings: FrameSettings = {
+    bins: pick('bins', isText, DEFAULT_SETTINGS.bins),
+    assign: pick('assign', isText, DEFAULT_SETTINGS.assign),
+    seed,
+    grid: pick('grid', isText, DEFAULT_SETTINGS.grid),
+    rotateAt: pick('rotate-at', (v): v is 'slice' | 'occurrence' => v === 'slice' || v === 'occurrence', DEFAULT_SETTINGS.rotateAt),
+    preferModel: p.get('prefer-model') === '1',
+    beyondModel: pick('beyond-model', (v): v is 'reject' | 'clamp' => v === 'reject' || v === 'clamp', DEFAULT_SETTINGS.beyondModel),
+  };
+  const layersText = p.get('layers');
+  const layerNames = layersText === null ? undefined : layersText.split(',').filter((x) => x !== '');
+  for (const name of layerNames ?? []) if (!(LAYER_KEYS as string[]).includes(name)) ignored.push(`layers: ${name}`);
+  const layers = layerNames === undefined ? DEFAULT_LAYERS
+    : (Object.fromEntries(LAYER_KEYS.map((k) => [k, layerNames.includes(k)])) as unknown as LayerVisibility);
+  const curvesText = p.get('curves');
+  const curveSeries = curvesText === null ? undefined
+    : curvesText.split(',').filter((x): x is CurveSeries => (CURVE_SERIES as readonly string[]).includes(x));
+  const mapText = p.get('map');
+  const mapView = mapText !== null && (MAP_VIEWS as readonly string[]).includes(mapText) ? (mapText as MapView) : undefined;
+  if (mapText !== null && mapView === undefined) ignored.push(`map=${mapText}`);
+  const sliceName = p.get('slice') ?? undefined;
+  return {
+    state: {
+      settings,
+      measure: pick('measure', (v): v is Measure => (MEASURES as readonly string[]).includes(v), 'occurrences'),
+      sliceName: sliceName !== undefined && isText(sliceName) ? sliceName : undefined,
+      mapView,
+      layers,
+      curveSeries,
+      normaliseCurves: p.get('normalise') === '1',
+    },
+    ignored,
+  };
+}
