@@ -1,7 +1,7 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import {
-  TableReadError, continuationPrefix, createCsvScanner, createOccurrenceReader, detach, findInvalidUtf8, recordFields, sniffBytes,
+  TableReadError, invalidUtf8Offset, createCsvScanner, createOccurrenceReader, detach, recordFields, sniffBytes,
   type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
@@ -141,13 +141,7 @@ function cannotOpen(path: string, err: unknown): TableReadError {
 async function invalidUtf8(
   path: string, previous: Uint8Array, chunk: Uint8Array, offset: number, final: boolean,
 ): Promise<TableReadError> {
-  const tail = previous.subarray(Math.max(0, previous.length - 4));
-  const joined = new Uint8Array(tail.length + chunk.length);
-  joined.set(tail);
-  joined.set(chunk, tail.length);
-  const from = continuationPrefix(joined);
-  const at = findInvalidUtf8(joined.subarray(from), final);
-  const byte = offset - tail.length + from + Math.max(at, 0);
+  const byte = invalidUtf8Offset(previous, chunk, offset, final);
   const line = await lineAtByte(path, byte);
   return new TableReadError(`line ${line}: invalid UTF-8 at byte ${byte} (counting from 0); save the file as UTF-8`, line);
 }

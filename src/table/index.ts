@@ -10,7 +10,7 @@ export type { ScannedRecord } from './scanned-record';
 export { isTrimmable, trimmedEnd, trimmedStart } from './text-span';
 export { StringDictionary, detach } from './string-dictionary';
 export { SNIFF_BYTES, sniffBytes } from './sniff-bytes';
-export { continuationPrefix, findInvalidUtf8 } from './utf8-check';
+export { continuationPrefix, findInvalidUtf8, invalidUtf8Offset } from './utf8-check';
 export { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, matchSynonym, normaliseHeader } from './column-synonyms';
 export type { ColumnIndex, OccurrenceField, SynonymMatch } from './column-synonyms';
 export { mapColumns } from './column-mapping';

@@ -42,3 +42,18 @@ export function continuationPrefix(bytes: Uint8Array): number {
   while (i < 3 && i < bytes.length && (bytes[i] & 0xc0) === 0x80) i++;
   return i;
 }
+
+/**
+ * Byte offset in the whole input of the first ill-formed sequence, when a strict decoder failed
+ * on `chunk` (which starts at byte `offset`): the sequence may have begun in the last bytes of
+ * the `previous` chunk.
+ */
+export function invalidUtf8Offset(previous: Uint8Array, chunk: Uint8Array, offset: number, final: boolean): number {
+  const tail = previous.subarray(Math.max(0, previous.length - 4));
+  const joined = new Uint8Array(tail.length + chunk.length);
+  joined.set(tail);
+  joined.set(chunk, tail.length);
+  const from = continuationPrefix(joined);
+  const at = findInvalidUtf8(joined.subarray(from), final);
+  return offset - tail.length + from + Math.max(at, 0);
+}

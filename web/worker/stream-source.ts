@@ -3,7 +3,7 @@
  * the command line's checks: UTF-16 and binary files refused from their first bytes, invalid
  * UTF-8 an error naming its byte offset and line, never a replacement character.
  */
-import { TableReadError, continuationPrefix, findInvalidUtf8, sniffBytes } from '../../src/table';
+import { TableReadError, invalidUtf8Offset, sniffBytes } from '../../src/table';
 import type { Source } from '../protocol';
 
 export interface StreamCallbacks {
@@ -72,13 +72,7 @@ export async function streamText(blob: Blob, callbacks: StreamCallbacks): Promis
 
 /** The decoder failed on `chunk` (starting at byte `offset`); the bad sequence may start in the previous chunk's tail. */
 async function invalidUtf8(blob: Blob, previous: Uint8Array, chunk: Uint8Array, offset: number, final: boolean): Promise<TableReadError> {
-  const tail = previous.subarray(Math.max(0, previous.length - 4));
-  const joined = new Uint8Array(tail.length + chunk.length);
-  joined.set(tail);
-  joined.set(chunk, tail.length);
-  const from = continuationPrefix(joined);
-  const at = findInvalidUtf8(joined.subarray(from), final);
-  const byte = offset - tail.length + from + Math.max(at, 0);
+  const byte = invalidUtf8Offset(previous, chunk, offset, final);
   const line = lineAtByte(new Uint8Array(await blob.slice(0, byte).arrayBuffer()));
   return new TableReadError(`line ${line}: invalid UTF-8 at byte ${byte} (counting from 0); save the file as UTF-8`, line);
 }
