@@ -13,6 +13,7 @@ const state: UrlState = {
   layers: { ...DEFAULT_LAYERS, spanningTree: true, points: false },
   curveSeries: ['taxa', 'hullKm2'],
   normaliseCurves: true,
+  wholeScale: true,
 };
 
 describe('the page address', () => {

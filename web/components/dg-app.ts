@@ -7,6 +7,7 @@ import { LitElement, css, html, nothing } from 'lit';
 import { createRef, ref, type Ref } from 'lit/directives/ref.js';
 import { INITIAL_STATE, type AppState, type CurveSeries } from '../state/app-state';
 import { download } from '../state/download';
+import { shownSlices } from '../state/slice-range';
 import { Store, StoreController } from '../state/store';
 import { WorkbenchActions } from '../state/workbench-actions';
 import { WorkerClient } from '../state/worker-client';
@@ -49,11 +50,10 @@ export class DgApp extends LitElement {
   private readonly onKey = (event: KeyboardEvent): void => {
     if (event.defaultPrevented || event.altKey || event.ctrlKey || event.metaKey) return;
     if (isTextEntry(event.composedPath()[0])) return;
-    const state = this.store.state;
     if (event.key === 'ArrowLeft') this.actions.stepSlice(-1);
     else if (event.key === 'ArrowRight') this.actions.stepSlice(1);
-    else if (event.key === 'Home') this.actions.setSlice(0);
-    else if (event.key === 'End') this.actions.setSlice((state.view?.slices.length ?? 1) - 1);
+    else if (event.key === 'Home') this.actions.slicesEnd(-1);
+    else if (event.key === 'End') this.actions.slicesEnd(1);
     else return;
     event.preventDefault();
   };
@@ -117,6 +117,7 @@ export class DgApp extends LitElement {
   override render() {
     const s = this.controller.state;
     const a = this.actions;
+    const range = shownSlices(s.view?.slices ?? [], s.wholeScale);
     const webglView = s.webgl && (s.mapView === 'globe' || s.mapView === 'flat');
     return html`
       <header>
@@ -125,7 +126,7 @@ export class DgApp extends LitElement {
         ${s.busy === undefined ? nothing : html`
           <span class="busy" role="status">
             ${s.busy.label}
-            <progress max="1" .value=${s.busy.fraction ?? null} aria-label="Progress"></progress>
+            ${s.busy.fraction === undefined ? html`<progress aria-label="Working"></progress>` : html`<progress max="1" .value=${s.busy.fraction} aria-label="Progress"></progress>`}
             ${s.busy.cancelId === undefined ? nothing : html`<button @click=${() => a.cancel()}>Cancel</button>`}
           </span>`}
       </header>
@@ -139,7 +140,8 @@ export class DgApp extends LitElement {
         <main @slice-select=${(e: CustomEvent<{ slice: number }>) => a.setSlice(e.detail.slice)}
           @cell-hover=${(e: CustomEvent<{ slice: number; entry: number } | null>) => void a.focusCell(e.detail)}>
           ${s.problem === undefined ? nothing : html`<div class="problem-bar" role="alert"><p>${s.problem}</p><button @click=${() => a.clearProblem()} aria-label="Dismiss message">×</button></div>`}
-          <div class="strip"><dg-time-strip .slices=${s.view?.slices ?? []} .periods=${s.view?.periods ?? []} .slice=${s.slice}></dg-time-strip></div>
+          <div class="strip"><dg-time-strip .slices=${s.view?.slices ?? []} .periods=${s.view?.periods ?? []} .slice=${s.slice}
+            .range=${range} .wholeScale=${s.wholeScale} @whole-scale=${(e: CustomEvent<{ wholeScale: boolean }>) => a.setWholeScale(e.detail.wholeScale)}></dg-time-strip></div>
           <div class="map">
             ${webglView
               ? html`<dg-globe-view ${ref(this.globe)} .view=${s.view} .slice=${s.slice} .measure=${s.measure} .layers=${s.layers}

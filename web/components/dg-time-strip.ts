@@ -5,6 +5,7 @@
  */
 import { LitElement, css, html, svg } from 'lit';
 import type { SliceMetrics } from '../../src/analysis';
+import type { SliceRange } from '../state/slice-range';
 import { panelStyles } from './shared-styles';
 
 /** Muted tints for alternating chart periods (ours; labels carry the names, colour only separates). */
@@ -13,10 +14,13 @@ const PLAY_STEP_MS = 700;
 const HEIGHT = 46;
 
 export class DgTimeStrip extends LitElement {
-  static override properties = { slices: { attribute: false }, periods: { attribute: false }, slice: { type: Number }, playing: { state: true }, width: { state: true } };
+  static override properties = { slices: { attribute: false }, periods: { attribute: false }, slice: { type: Number }, range: { attribute: false }, wholeScale: { type: Boolean }, playing: { state: true }, width: { state: true } };
   declare slices: readonly SliceMetrics[];
   declare periods: readonly string[];
   declare slice: number;
+  /** The slices shown (see shownSlices). */
+  declare range: SliceRange;
+  declare wholeScale: boolean;
   declare playing: boolean;
   /** Drawn width in CSS pixels, so that labels are not stretched. */
   declare width: number;
@@ -29,6 +33,8 @@ export class DgTimeStrip extends LitElement {
     this.slices = [];
     this.periods = [];
     this.slice = 0;
+    this.range = { from: 0, to: 0 };
+    this.wholeScale = false;
     this.playing = false;
     this.width = 1000;
   }
@@ -53,14 +59,17 @@ export class DgTimeStrip extends LitElement {
   }
 
   private get span(): { old: number; young: number } {
-    const n = this.slices.length;
-    return n === 0 ? { old: 1, young: 0 } : { old: this.slices[0].baseMa, young: this.slices[n - 1].topMa };
+    const first = this.slices[this.range.from], last = this.slices[this.range.to];
+    return first === undefined || last === undefined ? { old: 1, young: 0 } : { old: first.baseMa, young: last.topMa };
+  }
+
+  private get shown(): readonly SliceMetrics[] {
+    return this.slices.slice(this.range.from, this.range.to + 1);
   }
 
   private select(slice: number): void {
-    const n = this.slices.length;
-    const next = Math.min(n - 1, Math.max(0, slice));
-    if (n === 0 || next === this.slice) return;
+    const next = Math.min(this.range.to, Math.max(this.range.from, slice));
+    if (this.slices.length === 0 || next === this.slice) return;
     this.dispatchEvent(new CustomEvent('slice-select', { detail: { slice: next }, bubbles: true, composed: true }));
   }
 
@@ -69,18 +78,18 @@ export class DgTimeStrip extends LitElement {
     const box = (event.currentTarget as HTMLElement).getBoundingClientRect();
     const { old, young } = this.span;
     const age = old - ((event.clientX - box.left) / box.width) * (old - young);
-    let best = 0, gap = Infinity;
-    this.slices.forEach((s, k) => {
+    let best = this.range.from, gap = Infinity;
+    this.shown.forEach((s, k) => {
       const d = age > s.baseMa ? age - s.baseMa : age < s.topMa ? s.topMa - age : 0;
-      if (d < gap) { gap = d; best = k; }
+      if (d < gap) { gap = d; best = this.range.from + k; }
     });
     return best;
   }
 
   private onKey(event: KeyboardEvent): void {
     const moves: Record<string, number> = { ArrowLeft: -1, ArrowDown: -1, ArrowRight: 1, ArrowUp: 1, PageDown: -5, PageUp: 5 };
-    if (event.key === 'Home') this.select(0);
-    else if (event.key === 'End') this.select(this.slices.length - 1);
+    if (event.key === 'Home') this.select(this.range.from);
+    else if (event.key === 'End') this.select(this.range.to);
     else if (event.key in moves) this.select(this.slice + moves[event.key]);
     else return;
     event.preventDefault();
@@ -90,10 +99,10 @@ export class DgTimeStrip extends LitElement {
   private togglePlay(): void {
     if (this.playing) this.stop();
     else {
-      if (this.slice >= this.slices.length - 1) this.select(0);
+      if (this.slice >= this.range.to) this.select(this.range.from);
       this.playing = true;
       this.timer = setInterval(() => {
-        if (this.slice >= this.slices.length - 1) this.stop();
+        if (this.slice >= this.range.to) this.stop();
         else this.select(this.slice + 1);
       }, PLAY_STEP_MS);
     }
@@ -107,6 +116,7 @@ export class DgTimeStrip extends LitElement {
 
   override render() {
     const n = this.slices.length;
+    const { from } = this.range;
     const current = this.slices[this.slice];
     const { old, young } = this.span;
     const w = this.width;
@@ -117,29 +127,32 @@ export class DgTimeStrip extends LitElement {
     return html`
       <div class="row">
         <button @click=${this.togglePlay} aria-label=${this.playing ? 'Stop stepping through slices' : 'Play: step through slices'}>${this.playing ? '■ Stop' : '▶ Play'}</button>
-        <div class="strip" role="slider" tabindex="0" aria-label="Time slice" aria-valuemin="1" aria-valuemax=${n} aria-valuenow=${this.slice + 1}
+        <div class="strip" role="slider" tabindex="0" aria-label="Time slice" aria-valuemin=${from + 1} aria-valuemax=${this.range.to + 1} aria-valuenow=${this.slice + 1}
           aria-valuetext=${valueText} @keydown=${this.onKey}
           @pointerdown=${(e: PointerEvent) => { this.dragging = true; (e.currentTarget as HTMLElement).setPointerCapture(e.pointerId); this.select(this.sliceAt(e)); }}
           @pointermove=${(e: PointerEvent) => { if (this.dragging) this.select(this.sliceAt(e)); }}
           @pointerup=${() => (this.dragging = false)}>
           <svg viewBox="0 0 ${w} ${HEIGHT}" aria-hidden="true">
-            ${this.slices.map((s, k) => svg`<rect x=${x(s.baseMa)} y="14" width=${Math.max(0.5, x(s.topMa) - x(s.baseMa))} height=${HEIGHT - 14}
-              fill=${PERIOD_TINTS[(periodIndex.get(this.periods[k]) ?? 0) % PERIOD_TINTS.length]} stroke="#ffffff" stroke-width="0.6"></rect>`)}
+            ${this.shown.map((s, k) => svg`<rect x=${x(s.baseMa)} y="14" width=${Math.max(0.5, x(s.topMa) - x(s.baseMa))} height=${HEIGHT - 14}
+              fill=${PERIOD_TINTS[(periodIndex.get(this.periods[from + k]) ?? 0) % PERIOD_TINTS.length]} stroke="#ffffff" stroke-width="0.6"></rect>`)}
             ${this.periodLabels(x)}
             ${current === undefined ? null : svg`<rect x=${x(current.baseMa) - 1} y="12" width=${Math.max(3, x(current.topMa) - x(current.baseMa)) + 2} height=${HEIGHT - 12}
               fill="none" stroke="#0b2a45" stroke-width="2.5" vector-effect="non-scaling-stroke"></rect>`}
           </svg>
         </div>
         <span class="current" aria-live="polite">${current === undefined ? '' : html`${current.name} <span class="hint">${current.baseMa}–${current.topMa} Ma</span>`}</span>
+        <label class="hint"><input type="checkbox" name="whole-scale" .checked=${this.wholeScale} @change=${(e: Event) => this.dispatchEvent(new CustomEvent('whole-scale',
+          { detail: { wholeScale: (e.target as HTMLInputElement).checked }, bubbles: true, composed: true }))}> whole scale</label>
       </div>`;
   }
 
   /** One label per run of slices in the same period, above the strip. */
   private periodLabels(x: (ma: number) => number) {
     const labels = [];
-    for (let k = 0; k < this.slices.length;) {
+    if (this.slices.length === 0) return labels;
+    for (let k = this.range.from; k <= this.range.to;) {
       let end = k;
-      while (end + 1 < this.slices.length && this.periods[end + 1] === this.periods[k]) end++;
+      while (end + 1 <= this.range.to && this.periods[end + 1] === this.periods[k]) end++;
       const from = x(this.slices[k].baseMa), to = x(this.slices[end].topMa);
       if (to - from > 40 && this.periods[k] !== '') labels.push(svg`<text x=${(from + to) / 2} y="10" text-anchor="middle">${this.periods[k]}</text>`);
       k = end + 1;

@@ -40,6 +40,8 @@ export interface AppState {
   readonly measure: Measure;
   readonly view: AnalysisView | undefined;
   readonly slice: number;
+  /** Show every slice of the scale, not only the data's range (see shownSlices). */
+  readonly wholeScale: boolean;
   readonly mapView: MapView;
   readonly layers: LayerVisibility;
   readonly showAllPoints: boolean;
@@ -61,6 +63,7 @@ export const INITIAL_STATE: AppState = {
   measure: 'occurrences',
   view: undefined,
   slice: 0,
+  wholeScale: false,
   mapView: 'globe',
   layers: DEFAULT_LAYERS,
   showAllPoints: false,

@@ -15,6 +15,7 @@ export interface UrlState {
   readonly layers: LayerVisibility;
   readonly curveSeries: readonly CurveSeries[] | undefined;
   readonly normaliseCurves: boolean;
+  readonly wholeScale: boolean;
 }
 
 const LAYER_KEYS = Object.keys(DEFAULT_LAYERS) as (keyof LayerVisibility)[];
@@ -35,6 +36,7 @@ export function encodeUrlState(state: UrlState): string {
   p.set('layers', LAYER_KEYS.filter((k) => state.layers[k]).join(','));
   if (state.curveSeries !== undefined) p.set('curves', state.curveSeries.join(','));
   if (state.normaliseCurves) p.set('normalise', '1');
+  if (state.wholeScale) p.set('whole-scale', '1');
   return p.toString();
 }
 
@@ -82,6 +84,7 @@ export function decodeUrlState(hash: string): { state: UrlState; ignored: string
       layers,
       curveSeries,
       normaliseCurves: p.get('normalise') === '1',
+      wholeScale: p.get('whole-scale') === '1',
     },
     ignored,
   };

@@ -2,13 +2,13 @@
  * What the user can do, as actions on the store: each asks the worker where numbers are needed
  * and then updates the state in one step. Components call these; they never talk to the worker.
  */
-import type { SliceMetrics } from '../../src/analysis';
 import { parseSession } from '../../src/export/session';
 import { DEMO_EXTRAS, DEMO_TABLE } from '../demo-sources';
 import type { ExportFile, ExtraRole, FrameSettings, Measure, Source } from '../protocol';
 import type { AppState, CurveSeries } from './app-state';
 import { download } from './download';
 import { matchingSlice, sliceNamed } from './slice-matching';
+import { shownSlices } from './slice-range';
 import type { Store } from './store';
 import { decodeUrlState, encodeUrlState } from './url-state';
 import type { LayerVisibility, MapView } from './view-options';
@@ -25,11 +25,12 @@ export class WorkbenchActions {
   async start(hash: string): Promise<void> {
     const { state: fromUrl, ignored } = decodeUrlState(hash);
     this.store.update({
-      settings: fromUrl.settings, measure: fromUrl.measure, layers: fromUrl.layers, normaliseCurves: fromUrl.normaliseCurves,
+      settings: fromUrl.settings, measure: fromUrl.measure, layers: fromUrl.layers, normaliseCurves: fromUrl.normaliseCurves, wholeScale: fromUrl.wholeScale,
       ...(fromUrl.mapView === undefined ? {} : { mapView: fromUrl.mapView }),
       ...(fromUrl.curveSeries === undefined ? {} : { curveSeries: fromUrl.curveSeries }),
       ...(ignored.length === 0 ? {} : { problem: `Ignored in the page address: ${ignored.join('; ')}.` }),
     });
+    this.store.update({ busy: { label: 'Loading the demo scenario…', fraction: undefined } });
     try {
       await this.loadTable(DEMO_TABLE, {});
       for (const extra of DEMO_EXTRAS) await this.loadExtraSource(extra.role, extra.source);
@@ -38,7 +39,7 @@ export class WorkbenchActions {
         this.store.update({ problem: `${errorText(error)} The default settings are used instead.` });
         await this.analyse({ ...this.state.settings, bins: 'stages', assign: 'midpoint', grid: 'healpix:32' });
       });
-      this.store.update({ phase: 'ready' });
+      this.store.update({ phase: 'ready', busy: undefined });
     } catch (error) {
       this.store.update({ phase: 'error', busy: undefined, problem: errorText(error) });
     }
@@ -86,10 +87,12 @@ export class WorkbenchActions {
     await this.run('Recomputing…', () => this.analyse(settings));
   }
 
+  /** Moves to a slice, kept within the slices shown. */
   setSlice(slice: number): void {
-    const count = this.state.view?.slices.length ?? 0;
-    if (count === 0) return;
-    const next = Math.min(count - 1, Math.max(0, Math.round(slice)));
+    const view = this.state.view;
+    if (view === undefined || view.slices.length === 0) return;
+    const { from, to } = shownSlices(view.slices, this.state.wholeScale);
+    const next = Math.min(to, Math.max(from, Math.round(slice)));
     if (next === this.state.slice) return;
     this.store.update({ slice: next, cell: undefined });
     this.syncUrl();
@@ -97,6 +100,20 @@ export class WorkbenchActions {
 
   stepSlice(delta: number): void {
     this.setSlice(this.state.slice + delta);
+  }
+
+  /** First (−1) or last (+1) slice shown. */
+  slicesEnd(end: -1 | 1): void {
+    const view = this.state.view;
+    if (view === undefined) return;
+    const { from, to } = shownSlices(view.slices, this.state.wholeScale);
+    this.setSlice(end < 0 ? from : to);
+  }
+
+  setWholeScale(wholeScale: boolean): void {
+    this.store.update({ wholeScale });
+    this.setSlice(this.state.slice);
+    this.syncUrl();
   }
 
   setMeasure(measure: Measure): void {
@@ -194,8 +211,9 @@ export class WorkbenchActions {
     const answer = expectAnswer(await this.client.send({ type: 'analyse', settings }).answer, 'analysis');
     const { view } = answer;
     const named = sliceName === undefined ? undefined : sliceNamed(view.slices, sliceName);
-    const slice = named ?? (previous === undefined ? firstOccupied(view.slices) : matchingSlice(view.slices, previous));
-    this.store.update({ view, settings, slice, cell: undefined });
+    const wanted = named ?? (previous === undefined ? 0 : matchingSlice(view.slices, previous));
+    const { from, to } = shownSlices(view.slices, this.state.wholeScale);
+    this.store.update({ view, settings, slice: Math.min(to, Math.max(from, wanted)), cell: undefined });
     this.syncUrl();
   }
 
@@ -217,15 +235,10 @@ export class WorkbenchActions {
     const s = this.state;
     const hash = encodeUrlState({
       settings: s.settings, measure: s.measure, sliceName: s.view?.slices[s.slice]?.name, mapView: s.mapView,
-      layers: s.layers, curveSeries: s.curveSeries, normaliseCurves: s.normaliseCurves,
+      layers: s.layers, curveSeries: s.curveSeries, normaliseCurves: s.normaliseCurves, wholeScale: s.wholeScale,
     });
     history.replaceState(null, '', `#${hash}`);
   }
-}
-
-function firstOccupied(slices: readonly SliceMetrics[]): number {
-  const k = slices.findIndex((s) => s.occurrences > 0);
-  return k < 0 ? 0 : k;
 }
 
 function errorText(error: unknown): string {
