@@ -74,7 +74,7 @@ export class DgApp extends LitElement {
     .map > * { position: absolute; inset: 0; }
     .problem-bar { display: flex; gap: 0.5rem; align-items: start; padding: 0.4rem 0.8rem; background: #fff4e5; border-bottom: 1px solid #e8c28a; }
     .problem-bar p { margin: 0; flex: 1; white-space: pre-wrap; }
-    dg-curves-panel { height: 16rem; border-top: 1px solid #dde3e8; }
+    dg-curves-panel { height: 22rem; border-top: 1px solid #dde3e8; }
     .below { padding: 0.4rem 0.8rem; border-top: 1px solid #dde3e8; background: #fff; }
   `];
 
@@ -150,7 +150,7 @@ export class DgApp extends LitElement {
                   .projection=${s.mapView === 'globe' || s.mapView === 'flat' ? 'equal-earth' : s.mapView}
                   .notice=${s.webgl ? '' : 'This browser gives no WebGL, so the map is drawn on an equal-area canvas instead of the globe.'}></dg-equal-area-view>`}
           </div>
-          <dg-curves-panel ${ref(this.curves)} .view=${s.view} .slice=${s.slice} .series=${s.curveSeries} .normalise=${s.normaliseCurves}
+          <dg-curves-panel ${ref(this.curves)} .view=${s.view} .slice=${s.slice} .range=${range} .series=${s.curveSeries} .normalise=${s.normaliseCurves}
             @curves-change=${(e: CustomEvent<{ series: readonly CurveSeries[]; normalise: boolean }>) => a.setCurves(e.detail.series, e.detail.normalise)}></dg-curves-panel>
           <div class="below"><dg-rejects-panel .state=${s} .actions=${a}></dg-rejects-panel></div>
         </main>

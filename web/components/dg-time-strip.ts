@@ -3,7 +3,7 @@
  * tinted by chart period, with the current slice marked. A slider for keyboard and screen
  * readers; drag or click to move; a play button steps through the slices.
  */
-import { LitElement, css, html, svg } from 'lit';
+import { LitElement, css, html, svg, type SVGTemplateResult } from 'lit';
 import type { SliceMetrics } from '../../src/analysis';
 import type { SliceRange } from '../state/slice-range';
 import { panelStyles } from './shared-styles';
@@ -148,7 +148,7 @@ export class DgTimeStrip extends LitElement {
 
   /** One label per run of slices in the same period, above the strip. */
   private periodLabels(x: (ma: number) => number) {
-    const labels = [];
+    const labels: SVGTemplateResult[] = [];
     if (this.slices.length === 0) return labels;
     for (let k = this.range.from; k <= this.range.to;) {
       let end = k;

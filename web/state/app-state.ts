@@ -25,8 +25,10 @@ export interface CellFocus {
   readonly taxa?: readonly string[];
 }
 
-export const CURVE_SERIES = ['occurrences', 'collections', 'taxa', 'cells', 'hullKm2', 'mstKm', 'latSpan'] as const;
-export type CurveSeries = (typeof CURVE_SERIES)[number];
+/** The curves panel's series (its SERIES table is the one list). */
+import type { SeriesKey } from '../charts/series';
+export { SERIES_KEYS as CURVE_SERIES } from '../charts/series';
+export type CurveSeries = SeriesKey;
 
 export interface AppState {
   readonly phase: 'loading' | 'ready' | 'error';
