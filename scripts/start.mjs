@@ -1,7 +1,14 @@
-// `npm start`: install what is missing, build, and run the demo scenario through the command line.
-// (The browser workbench will take over this command once it exists.)
+// `npm start`: install what is missing, build the command line and the browser workbench, and
+// serve the workbench on 127.0.0.1 (it loads the demo scenario itself). Stop with Ctrl+C.
+// The command-line demo run is described in the README.
+import { buildWeb } from './build-web.mjs';
 import { ensureInstall, run } from './ensure-install.mjs';
+import { serveWorkbench } from './serve.mjs';
 
 ensureInstall();
 run('node scripts/build-cli.mjs');
-run('node bin/driftgrid.js coverage assets/demo/occurrences.csv --bins stages --grid healpix:32 --out results/demo');
+buildWeb();
+await serveWorkbench().catch((error) => {
+  console.error(`driftgrid: ${error.message}`);
+  process.exit(1);
+});
