@@ -45,6 +45,7 @@ export type Request =
   | { readonly type: 'preview'; readonly id: number; readonly source: Source }
   | { readonly type: 'load-table'; readonly id: number; readonly source: Source; readonly mapping: Readonly<Record<string, string>> }
   | { readonly type: 'load-extra'; readonly id: number; readonly role: ExtraRole; readonly source: Source }
+  | { readonly type: 'unload-extra'; readonly id: number; readonly role: ExtraRole }
   | { readonly type: 'analyse'; readonly id: number; readonly settings: FrameSettings }
   | { readonly type: 'cell-taxa'; readonly id: number; readonly slice: number; readonly cell: number }
   | { readonly type: 'export'; readonly id: number; readonly file: ExportFile }
@@ -180,6 +181,7 @@ export type Response =
   | { readonly type: 'preview'; readonly id: number; readonly preview: TablePreview }
   | { readonly type: 'table-loaded'; readonly id: number; readonly summary: TableSummary }
   | { readonly type: 'extra-loaded'; readonly id: number; readonly summary: ExtraSummary }
+  | { readonly type: 'extra-unloaded'; readonly id: number; readonly role: ExtraRole }
   | { readonly type: 'analysis'; readonly id: number; readonly view: AnalysisView }
   | { readonly type: 'cell-taxa'; readonly id: number; readonly slice: number; readonly cell: number; readonly taxa: readonly string[] }
   | { readonly type: 'export'; readonly id: number; readonly file: ExportFile; readonly bytes: Uint8Array; readonly mime: string }

@@ -110,7 +110,9 @@ function isFaviconMiss(text: string, url: string): boolean {
 }
 
 /** Opens `url` in a fresh context (its own cache and storage) and records what the page does. */
-export async function openPage(browser: Browser, url: string, options: { waitUntil?: 'load' | 'domcontentloaded' } = {}): Promise<OpenedPage> {
+export async function openPage(
+  browser: Browser, url: string, options: { waitUntil?: 'load' | 'domcontentloaded'; initScript?: string } = {},
+): Promise<OpenedPage> {
   const context = await browser.newContext({ viewport: { width: 1280, height: 800 }, deviceScaleFactor: 1 });
   const requests: string[] = [];
   const consoleErrors: string[] = [];
@@ -118,6 +120,7 @@ export async function openPage(browser: Browser, url: string, options: { waitUnt
   context.on('request', (request) => requests.push(request.url()));
   await context.exposeFunction('__dgCspViolation', (text: string) => addOnce(cspViolations, text));
   await context.addInitScript({ content: INIT_SCRIPT });
+  if (options.initScript !== undefined) await context.addInitScript({ content: options.initScript });
   const page = await context.newPage();
   // Playwright reports the page's workers' console messages here too.
   page.on('console', (message) => {

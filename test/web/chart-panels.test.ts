@@ -39,7 +39,7 @@ afterEach(() => {
 
 describe('svgDocument', () => {
   it('escapes the five XML special characters', () => {
-    expect(escapeXml(`<a href="x">Tom & 'Jerry'</a>`)).toBe('&lt;a href=&quot;x&quot;&gt;Tom &amp; &#39;Jerry&#39;&lt;/a&gt;');
+    expect(escapeXml(`<a href="x">Tom & 'Jerry'</a>`)).toBe('&lt;a href=&quot;x&quot;&gt;Tom &amp; &apos;Jerry&apos;&lt;/a&gt;');
   });
 
   it('writes text marks, title and description as text, never markup', () => {

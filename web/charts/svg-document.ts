@@ -1,15 +1,11 @@
 /** A standalone SVG document from marks, with every piece of text escaped. */
+import { escapeXml } from '../figure/escape-xml';
 import type { Mark } from './marks';
 
 /** Font for every chart, on screen and in files (no web fonts: the page fetches nothing). */
 export const CHART_FONT = 'system-ui, -apple-system, "Segoe UI", Roboto, sans-serif';
 
-/** Escapes text for XML character data and attribute values (quotes included). */
-export function escapeXml(text: string): string {
-  return text.replace(/[&<>"']/g, (c) => ESCAPES[c]);
-}
-
-const ESCAPES: Readonly<Record<string, string>> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+export { escapeXml };
 
 function attr(name: string, value: string | number | undefined): string {
   return value === undefined || value === '' ? '' : ` ${name}="${escapeXml(String(value))}"`;

@@ -30,8 +30,8 @@ export class DgRejectsPanel extends LitElement {
     const excluded = this.state?.view?.excluded ?? 0;
     return html`
       <details ?open=${rejects.length > 0 && rejects.length <= 20}>
-        <summary><span data-field="rejected-count">${rejects.length.toLocaleString('en')}</span> rows rejected on reading;
-          ${excluded.toLocaleString('en')} accepted rows in no slice</summary>
+        <summary><span data-field="rejected-count">${rejects.length.toLocaleString('en')}</span> ${rejects.length === 1 ? 'row' : 'rows'} rejected on reading;
+          ${excluded.toLocaleString('en')} accepted ${excluded === 1 ? 'row' : 'rows'} in no slice</summary>
         <p class="hint">Nothing is dropped silently: every row is either in a slice or listed in rejects.csv with the reason.
           <button @click=${() => void this.actions?.exportFile('rejects.csv')}>Download rejects.csv</button></p>
         ${rejects.length === 0 ? nothing : html`

@@ -15,6 +15,9 @@ import type { LayerVisibility, MapView } from './view-options';
 import { expectAnswer, type ProgressMessage, type WorkerClient } from './worker-client';
 
 export class WorkbenchActions {
+  /** Optional inputs that came with the demo: they go when the user brings a table of their own. */
+  private readonly demoExtras = new Set<ExtraRole>();
+
   constructor(private readonly store: Store<AppState>, private readonly client: WorkerClient) {}
 
   private get state(): AppState {
@@ -33,7 +36,10 @@ export class WorkbenchActions {
     this.store.update({ busy: { label: 'Loading the demo scenario…', fraction: undefined } });
     try {
       await this.loadTable(DEMO_TABLE, {});
-      for (const extra of DEMO_EXTRAS) await this.loadExtraSource(extra.role, extra.source);
+      for (const extra of DEMO_EXTRAS) {
+        await this.loadExtraSource(extra.role, extra.source);
+        this.demoExtras.add(extra.role);
+      }
       await this.analyse(fromUrl.settings, fromUrl.sliceName).catch(async (error: unknown) => {
         // Settings from an old or edited address may not apply: say so and fall back.
         this.store.update({ problem: `${errorText(error)} The default settings are used instead.` });
@@ -59,6 +65,7 @@ export class WorkbenchActions {
     if (pending === undefined) return;
     const ok = await this.run(`Reading ${pending.file.name}…`, async () => {
       await this.loadTable({ kind: 'file', file: pending.file }, mapping);
+      await this.unloadDemoExtras();
       this.store.update({ pendingImport: undefined });
       await this.analyse(this.state.settings);
     });
@@ -77,6 +84,7 @@ export class WorkbenchActions {
   async loadExtra(role: ExtraRole, file: File): Promise<void> {
     await this.run(`Reading ${file.name}…`, async () => {
       await this.loadExtraSource(role, { kind: 'file', file });
+      this.demoExtras.delete(role);
       const settings = role === 'bins' ? { ...this.state.settings, bins: 'file' } : this.state.settings;
       await this.analyse(settings);
     });
@@ -198,6 +206,17 @@ export class WorkbenchActions {
     const { answer } = this.client.send({ type: 'load-table', source, mapping }, onProgress);
     const loaded = expectAnswer(await answer, 'table-loaded');
     this.store.update({ table: loaded.summary });
+  }
+
+  /** The demo's poles, polygons and indicators do not belong with the user's own table. */
+  private async unloadDemoExtras(): Promise<void> {
+    const extras = { ...this.state.extras };
+    for (const role of this.demoExtras) {
+      expectAnswer(await this.client.send({ type: 'unload-extra', role }).answer, 'extra-unloaded');
+      delete extras[role];
+    }
+    this.demoExtras.clear();
+    this.store.update({ extras });
   }
 
   private async loadExtraSource(role: ExtraRole, source: Source): Promise<void> {

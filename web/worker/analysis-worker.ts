@@ -59,6 +59,10 @@ async function handle(request: Request): Promise<void> {
       post({ type: 'extra-loaded', id: request.id, summary: extra.summary });
       return;
     }
+    case 'unload-extra':
+      workbench.unsetExtra(request.role);
+      post({ type: 'extra-unloaded', id: request.id, role: request.role });
+      return;
     case 'analyse': {
       const { view, transfer } = workbench.analyse(request.settings);
       post({ type: 'analysis', id: request.id, view }, transfer);

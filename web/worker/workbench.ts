@@ -43,6 +43,11 @@ export class Workbench {
     this.current = undefined;
   }
 
+  unsetExtra(role: ExtraRole): void {
+    this.extras.delete(role);
+    this.current = undefined;
+  }
+
   analyse(settings: FrameSettings): { view: AnalysisView; transfer: ArrayBuffer[] } {
     const table = this.requireTable();
     const scale = this.scaleFor(settings, table.read);

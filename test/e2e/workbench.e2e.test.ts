@@ -1,0 +1,209 @@
+// What a user does with the workbench, in headless Chromium against the built app: scrub with
+// the keyboard and read the same numbers the command line writes, change the grid, import a
+// table through the mapping step and see its rejected row, export and reopen a session, and
+// use the page with no WebGL at all. Screenshots are kept in test-artifacts/e2e/.
+import { mkdtempSync, readFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { runCli } from '../cli/run-cli';
+import { countDrawnPixels, launchBrowser, openPage, saveScreenshot, startApp, waitForCanvasDrawn, type App, type OpenedPage } from './harness';
+
+const DEMO = 'assets/demo';
+let app: App;
+let browser: Browser;
+
+beforeAll(async () => {
+  app = await startApp();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await app?.close();
+});
+
+/** The command line's slices.csv for the demo with the given options (the app loads the demo's poles too). */
+async function cliSlices(...options: string[]): Promise<{ text: string; rows: Map<string, Record<string, string>> }> {
+  const out = mkdtempSync(join(tmpdir(), 'dg-e2e-'));
+  const run = await runCli('coverage', `${DEMO}/occurrences.csv`, '--rotation', `${DEMO}/poles.csv`, ...options, '--out', out, '--quiet');
+  expect(run.status, run.stderr).toBe(0);
+  const text = readFileSync(join(out, 'slices.csv'), 'utf8');
+  const [header, ...lines] = text.trim().split('\n');
+  const names = header.split(',');
+  const rows = new Map(lines.map((line) => {
+    const fields = line.split(',');
+    const row = Object.fromEntries(names.map((n, k) => [n, fields[k]]));
+    return [row.name, row] as const;
+  }));
+  return { text, rows };
+}
+
+async function waitReady(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });
+}
+
+async function field(page: Page, name: string): Promise<string> {
+  return (await page.locator(`dg-slice-summary [data-field="${name}"]`).textContent())?.trim() ?? '';
+}
+
+/** The page's numbers for the current slice, as the CSV writes them (thousands separators gone). */
+async function pageSlice(page: Page): Promise<Record<string, string>> {
+  const read = async (name: string) => (await field(page, name)).replace(/,/g, '');
+  return {
+    name: await field(page, 'name'),
+    occurrences: await read('occurrences'), collections: await read('collections'), taxa: await read('taxa'), cells: await read('cells'),
+    hull_km2: await read('hull_km2'), mst_km: await read('mst_km'), lat_span: await read('lat_span'),
+  };
+}
+
+/** Checks the page's slice against a slices.csv row; the page rounds km to whole numbers and degrees to 0.1. */
+function expectSameSlice(shown: Record<string, string>, row: Record<string, string> | undefined): void {
+  expect(row, `slice ${shown.name} in slices.csv`).toBeDefined();
+  if (row === undefined) return;
+  for (const key of ['occurrences', 'collections', 'taxa', 'cells']) expect(shown[key], key).toBe(row[key]);
+  // An empty CSV field (no hull, no places) is shown as a dash.
+  const rounded = (v: string, decimals: number) => (v === '' ? '—' : Number(v).toFixed(decimals));
+  expect(shown.hull_km2, 'hull_km2').toBe(rounded(row.hull_km2, 0));
+  expect(shown.mst_km, 'mst_km').toBe(rounded(row.mst_km, 0));
+  expect(shown.lat_span, 'lat_span').toBe(rounded(row.lat_span, 1));
+}
+
+describe('the workbench with the demo scenario', () => {
+  let opened: OpenedPage;
+  beforeAll(async () => {
+    opened = await openPage(browser, app.url);
+    await waitReady(opened.page);
+  });
+  afterAll(() => opened?.close());
+
+  test('draws the globe (screenshot kept, pixels checked)', async () => {
+    const { png, pixels } = await waitForCanvasDrawn(opened.page, 'dg-globe-view canvas', { minPixels: 2000 });
+    saveScreenshot('globe', png);
+    expect(pixels.distinctColours).toBeGreaterThan(10);
+  });
+
+  test('steps slices with Left/Right and shows the numbers slices.csv has for each', async () => {
+    const { page } = opened;
+    const { rows } = await cliSlices('--bins', 'stages', '--grid', 'healpix:32');
+    const first = await pageSlice(page);
+    expectSameSlice(first, rows.get(first.name));
+    await page.locator('body').click({ position: { x: 5, y: 5 } });
+    for (let step = 0; step < 3; step++) {
+      const before = await field(page, 'name');
+      await page.keyboard.press('ArrowRight');
+      await expect.poll(() => field(page, 'name')).not.toBe(before);
+      expectSameSlice(await pageSlice(page), rows.get(await field(page, 'name')));
+    }
+    const here = await field(page, 'name');
+    await page.keyboard.press('ArrowLeft');
+    await expect.poll(() => field(page, 'name')).not.toBe(here);
+    await page.keyboard.press('End');
+    const last = await field(page, 'name');
+    expect(Number(rows.get(last)?.occurrences)).toBeGreaterThan(0);
+  });
+
+  test('keeps the slice and shows the new numbers after the grid changes', async () => {
+    const { page } = opened;
+    const before = await field(page, 'name');
+    await page.locator('dg-frame-controls select').filter({ has: page.locator('option[value="16"]') }).selectOption('16');
+    await expect.poll(() => page.evaluate(() => location.hash)).toContain('grid=healpix%3A16');
+    await waitReady(page);
+    expect(await field(page, 'name')).toBe(before);
+    const { rows } = await cliSlices('--bins', 'stages', '--grid', 'healpix:16');
+    expectSameSlice(await pageSlice(page), rows.get(before));
+  });
+
+  test('exports slices.csv identical to the command line, and a session that restores the settings', async () => {
+    const { page } = opened;
+    const { text } = await cliSlices('--bins', 'stages', '--grid', 'healpix:16');
+    const slicesDownload = page.waitForEvent('download');
+    await page.locator('dg-export-menu button[data-export="slices.csv"]').click();
+    expect(readFileSync(await (await slicesDownload).path(), 'utf8')).toBe(text);
+
+    const sessionDownload = page.waitForEvent('download');
+    await page.locator('dg-export-menu button[data-export="session.json"]').click();
+    const sessionPath = await (await sessionDownload).path();
+    const session = JSON.parse(readFileSync(sessionPath, 'utf8'));
+    expect(session.settings).toMatchObject({ bins: 'stages', grid: 'healpix:16', assign: 'midpoint' });
+
+    await page.locator('dg-frame-controls select#bins').selectOption('epochs');
+    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=epochs');
+    await waitReady(page);
+    await page.locator('dg-import-panel input[name="session"]').setInputFiles(sessionPath);
+    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=stages');
+    await waitReady(page);
+    expect(await page.locator('dg-frame-controls select#bins').inputValue()).toBe('stages');
+  });
+
+  test('shows the equal-area map and the curves with drawn content (screenshots kept)', async () => {
+    const { page } = opened;
+    await page.locator('dg-display-controls select[name="map-view"]').selectOption('equal-earth');
+    const { png } = await waitForCanvasDrawn(page, 'dg-equal-area-view canvas', { minPixels: 5000 });
+    saveScreenshot('equal-area-map', png);
+    const curves = await page.locator('dg-curves-panel').screenshot();
+    saveScreenshot('curves', curves);
+    expect((await countDrawnPixels(page, curves)).drawn).toBeGreaterThan(3000);
+    saveScreenshot('workbench-equal-area', await page.screenshot());
+  });
+});
+
+describe('importing a table', () => {
+  test('goes through the mapping step, lists the rejected row, and shows names as text', async () => {
+    const opened = await openPage(browser, app.url);
+    const { page } = opened;
+    const dialogs: string[] = [];
+    page.on('dialog', (d) => { dialogs.push(d.message()); void d.dismiss(); });
+    try {
+      await waitReady(page);
+      await page.locator('dg-import-panel input[name="occurrences"]').setInputFiles('test/e2e/fixtures/small-import.csv');
+      const mapping = page.locator('dg-import-panel section.mapping');
+      await expect.poll(() => mapping.count()).toBe(1);
+      await expect.poll(async () => (await mapping.textContent()) ?? '').toMatch(/taxon/);
+      // The hostile name is shown literally in the preview, never as an element.
+      expect(await mapping.locator('td', { hasText: '<img src=x onerror=alert(1)>' }).count()).toBe(1);
+      expect(await page.locator('dg-import-panel img').count()).toBe(0);
+      await page.locator('dg-import-panel select#map-taxon').selectOption('Fossil label');
+      await page.locator('dg-import-panel button', { hasText: 'Read the table' }).click();
+      await expect.poll(async () => (await page.locator('dg-import-panel [data-field="table-summary"]').textContent()) ?? '').toContain('small-import.csv');
+      await waitReady(page);
+      expect(await page.locator('dg-import-panel [data-field="table-summary"]').textContent()).toMatch(/7 rows read,\s+6 accepted, 1 rejected/);
+      expect(await page.locator('dg-rejects-panel [data-field="rejected-count"]').textContent()).toBe('1');
+      const rejected = page.locator('dg-rejects-panel tbody tr');
+      expect(await rejected.count()).toBe(1);
+      expect(await rejected.textContent()).toMatch(/6.*max_ma.*Gammora,abc/s);
+      expect(await field(page, 'name')).toBe('Cenomanian');
+      expect(await field(page, 'occurrences')).toBe('4');
+      expect(dialogs).toEqual([]);
+      expect(opened.foreignRequests()).toEqual([]);
+      saveScreenshot('import-small-table', await page.screenshot());
+    } finally {
+      await opened.close();
+    }
+  });
+});
+
+describe('a browser without WebGL', () => {
+  test('gets a notice and the equal-area canvas map instead of the globe', async () => {
+    const noWebgl = `(() => {
+      const original = HTMLCanvasElement.prototype.getContext;
+      HTMLCanvasElement.prototype.getContext = function (kind, ...rest) {
+        return String(kind).startsWith('webgl') || kind === 'experimental-webgl' ? null : original.call(this, kind, ...rest);
+      };
+    })();`;
+    const opened = await openPage(browser, app.url, { initScript: noWebgl });
+    try {
+      await waitReady(opened.page);
+      const { page } = opened;
+      await expect.poll(() => page.locator('dg-equal-area-view').count()).toBe(1);
+      expect(await page.locator('dg-globe-view').count()).toBe(0);
+      expect(await page.locator('dg-equal-area-view').textContent()).toBeDefined();
+      await expect.poll(async () => (await page.locator('dg-equal-area-view').evaluate((el) => el.shadowRoot?.textContent ?? ''))).toMatch(/no WebGL/i);
+      const { png } = await waitForCanvasDrawn(page, 'dg-equal-area-view canvas', { minPixels: 5000 });
+      saveScreenshot('no-webgl', png);
+      expect(opened.consoleErrors).toEqual([]);
+    } finally {
+      await opened.close();
+    }
+  });
+});
