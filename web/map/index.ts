@@ -1,0 +1,10 @@
+export { buildCellPolygons, type CellPolygons } from './cell-polygons';
+export { cellLayerId, CELL_LAYER_PREFIX, sliceLayers, type SliceLayerOptions } from './globe-layers';
+export { globeLegend, globeLegendStyles } from './globe-legend';
+export { cellTooltipLines, legendTicks, mapRegionLabel, type LegendTick } from './map-labels';
+export { graticule, GRATICULE_LAYER_ID, GRATICULE_STEP_DEG, GRATICULE_VERTEX_STEP_DEG, offlineStyle } from './offline-style';
+export { POINT_DECISIONS, POINT_ZOOM, pointDecision, pointNotice, type PointDecision } from './point-budget';
+export { SliceCache } from './slice-cache';
+export { prepareSliceLayerData, type BinaryBuffer, type BinaryData, type SliceLayerData } from './slice-layer-data';
+export { slicePaths, type SlicePaths } from './slice-paths';
+export { sliceKindColours, slicePointCount, slicePositions } from './slice-points';
