@@ -41,10 +41,11 @@ describe('the e2e harness', () => {
     // A worker runs evaluations in order: once this one is done, so is the harness's listener setup.
     await opened.page.workers()[0].evaluate(() => 0);
     await opened.page.evaluate(() => (window as unknown as { misbehaveInWorker(): Promise<void> }).misbehaveInWorker());
-    const violations = opened.cspViolations.join('\n');
-    expect(violations).toMatch(/inline script/i);
-    expect(violations).toContain('example.invalid/data.csv');
-    expect(violations).toMatch(/^worker: script-src eval/m);
+    // Console messages reach the harness asynchronously: wait for them rather than race them.
+    const violations = () => opened.cspViolations.join('\n');
+    await expect.poll(violations).toMatch(/inline script/i);
+    await expect.poll(violations).toContain('example.invalid/data.csv');
+    await expect.poll(violations).toMatch(/^worker: script-src eval/m);
     expect(opened.consoleErrors).toEqual([expect.stringContaining('something went wrong')]);
     expect((await runAxe(opened.page)).map((v) => `${v.id} ${v.impact}`)).toEqual(['image-alt critical']);
     await opened.close();

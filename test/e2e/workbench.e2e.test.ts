@@ -172,6 +172,8 @@ describe('importing a table', () => {
       const rejected = page.locator('dg-rejects-panel tbody tr');
       expect(await rejected.count()).toBe(1);
       expect(await rejected.textContent()).toMatch(/6.*max_ma.*Gammora,abc/s);
+      // The demo's poles, polygons and indicators do not stay with the user's table.
+      expect(await page.locator('dg-import-panel').evaluate((el) => el.shadowRoot?.textContent ?? '')).not.toContain('(demo)');
       expect(await field(page, 'name')).toBe('Cenomanian');
       expect(await field(page, 'occurrences')).toBe('4');
       expect(dialogs).toEqual([]);

@@ -5,6 +5,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { countScale } from '../../web/colour/measure-scale';
+import { FIT_SHARE, fitZoom, GLOBE_RADIUS_PX_AT_ZOOM_0 } from '../../web/map/globe-camera';
 import { cellTooltipLines, legendTicks, mapRegionLabel } from '../../web/map/map-labels';
 import { graticule, offlineStyle } from '../../web/map/offline-style';
 import { POINT_ZOOM, pointDecision, pointNotice } from '../../web/map/point-budget';
@@ -114,5 +115,18 @@ describe('map words', () => {
     const ticks = legendTicks(countScale(1000));
     expect(ticks.map((t) => t.label)).toEqual(['1', '10', '100', '1,000']);
     ticks.forEach((t, k) => expect(t.percent).toBeCloseTo((100 * k) / 3, 9));
+  });
+});
+
+describe('fitZoom', () => {
+  it('sizes the globe’s radius to the share of the shorter side (radius doubles per zoom level)', () => {
+    const z = fitZoom(900, 600);
+    expect(GLOBE_RADIUS_PX_AT_ZOOM_0 * 2 ** z).toBeCloseTo(FIT_SHARE * 600, 9);
+  });
+
+  it('stays within zoom 0 to 3, and assumes 400 px when the container has no size yet', () => {
+    expect(fitZoom(50, 50)).toBe(0);
+    expect(fitZoom(10_000, 10_000)).toBe(3);
+    expect(fitZoom(0, 0)).toBe(fitZoom(400, 400));
   });
 });

@@ -69,6 +69,8 @@ export class DgApp extends LitElement {
     aside, .side { overflow: auto; padding: 0.6rem 0.8rem; display: flex; flex-direction: column; gap: 0.9rem; background: #fbfcfd; border-right: 1px solid #dde3e8; }
     .side { border-right: none; border-left: 1px solid #dde3e8; }
     main { display: grid; grid-template-rows: auto auto minmax(26rem, 1fr) auto auto; min-width: 0; min-height: 0; overflow: auto; }
+    /* Fixed rows: the message bar comes and goes without moving the others. */
+    .problem-bar { grid-row: 1; } .strip { grid-row: 2; } .map { grid-row: 3; } dg-curves-panel { grid-row: 4; } .below { grid-row: 5; }
     .strip { padding: 0.4rem 0.8rem; border-bottom: 1px solid #dde3e8; background: #fff; }
     .map { position: relative; min-height: 18rem; }
     .map > * { position: absolute; inset: 0; }

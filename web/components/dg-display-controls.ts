@@ -1,23 +1,13 @@
 /** How the slice is shown: measure, map view and layers (changes the picture, not the numbers). */
-import { LitElement, html, nothing } from 'lit';
+import { html, nothing } from 'lit';
 import { MEASURES, type Measure } from '../protocol';
-import type { AppState } from '../state/app-state';
 import { LAYER_LABELS, MAP_VIEW_LABELS, MAP_VIEWS, type LayerVisibility, type MapView } from '../state/view-options';
-import type { WorkbenchActions } from '../state/workbench-actions';
 import { panelStyles } from './shared-styles';
+import { WorkbenchPanel } from './workbench-panel';
 
 const MEASURE_LABELS: Readonly<Record<Measure, string>> = { occurrences: 'Occurrences', collections: 'Collections', taxa: 'Taxa' };
 
-export class DgDisplayControls extends LitElement {
-  static override properties = { state: { attribute: false }, actions: { attribute: false } };
-  declare state: AppState | undefined;
-  declare actions: WorkbenchActions | undefined;
-
-  constructor() {
-    super();
-    this.state = undefined;
-    this.actions = undefined;
-  }
+export class DgDisplayControls extends WorkbenchPanel {
 
   static override styles = panelStyles;
 

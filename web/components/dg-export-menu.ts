@@ -1,9 +1,8 @@
 /** Exports: the command line's files (written by the worker) and the current figures. */
-import { LitElement, css, html, nothing } from 'lit';
+import { css, html, nothing } from 'lit';
 import { EXPORT_FILES } from '../protocol';
-import type { AppState } from '../state/app-state';
-import type { WorkbenchActions } from '../state/workbench-actions';
 import { panelStyles } from './shared-styles';
+import { WorkbenchPanel } from './workbench-panel';
 
 export const FIGURES = ['map', 'curves', 'latitude'] as const;
 export type Figure = (typeof FIGURES)[number];
@@ -11,16 +10,7 @@ export type FigureFormat = 'svg' | 'png';
 
 const FIGURE_LABELS: Readonly<Record<Figure, string>> = { map: 'Map', curves: 'Curves', latitude: 'Latitude panel' };
 
-export class DgExportMenu extends LitElement {
-  static override properties = { state: { attribute: false }, actions: { attribute: false } };
-  declare state: AppState | undefined;
-  declare actions: WorkbenchActions | undefined;
-
-  constructor() {
-    super();
-    this.state = undefined;
-    this.actions = undefined;
-  }
+export class DgExportMenu extends WorkbenchPanel {
 
   static override styles = [panelStyles, css`
     .buttons { display: flex; flex-wrap: wrap; gap: 0.3rem; margin-bottom: 0.4rem; }

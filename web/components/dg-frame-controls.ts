@@ -2,25 +2,15 @@
  * The frame of the analysis: time bins, assignment rule, grid, and how the rotation model is
  * used. Every change recomputes in the worker; the current slice is kept.
  */
-import { LitElement, css, html, nothing } from 'lit';
+import { css, html, nothing } from 'lit';
 import type { FrameSettings } from '../protocol';
-import type { AppState } from '../state/app-state';
-import type { WorkbenchActions } from '../state/workbench-actions';
 import { panelStyles } from './shared-styles';
+import { WorkbenchPanel } from './workbench-panel';
 
 const CHART_BINS = [['stages', 'Chart stages'], ['epochs', 'Chart epochs'], ['periods', 'Chart periods']] as const;
 const NSIDES = [4, 8, 16, 32, 64, 128, 256];
 
-export class DgFrameControls extends LitElement {
-  static override properties = { state: { attribute: false }, actions: { attribute: false } };
-  declare state: AppState | undefined;
-  declare actions: WorkbenchActions | undefined;
-
-  constructor() {
-    super();
-    this.state = undefined;
-    this.actions = undefined;
-  }
+export class DgFrameControls extends WorkbenchPanel {
 
   static override styles = [panelStyles, css`
     .pair { display: flex; gap: 0.4rem; align-items: center; flex-wrap: wrap; }

@@ -5,14 +5,13 @@
  */
 import type { Layer, PickingInfo } from '@deck.gl/core';
 import { MapLibreOverlay } from '@deck.gl/maplibre';
-import { css, html, LitElement, nothing, unsafeCSS, type PropertyValues, type TemplateResult } from 'lit';
+import { html, LitElement, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import * as maplibregl from 'maplibre-gl';
-import maplibreCss from 'maplibre-gl/dist/maplibre-gl.css?inline';
 import workerUrl from 'maplibre-gl/dist/maplibre-gl-worker.mjs?url';
 import { countScale, type CountScale } from '../colour/measure-scale';
 import {
-  cellLayerId, cellTooltipLines, globeLegend, globeLegendStyles, mapRegionLabel, offlineStyle, POINT_ZOOM, pointDecision, pointNotice,
-  prepareSliceLayerData, SliceCache, sliceLayers, type SliceLayerData,
+  cellLayerId, cellTooltipLines, fitZoom, globeLegend, globeViewStyles, mapRegionLabel, offlineStyle, POINT_ZOOM, pointDecision, pointNotice,
+  prepareSliceLayerData, SliceCache, sliceLayers, slicePointCount, type SliceLayerData,
 } from '../map';
 import { IdleWork } from '../figure';
 import type { AnalysisView, Measure } from '../protocol';
@@ -29,6 +28,7 @@ const PREFETCH_STEPS = [1, -1] as const;
 interface Hover { readonly x: number; readonly y: number; readonly entry: number }
 
 export class DgGlobeView extends LitElement {
+  static override styles = globeViewStyles;
   static override properties = {
     view: { attribute: false }, slice: { type: Number }, measure: { type: String }, layers: { attribute: false },
     projection: { type: String }, showAllPoints: { type: Boolean, attribute: 'show-all-points' },
@@ -106,6 +106,8 @@ export class DgGlobeView extends LitElement {
     if (!LAYER_INPUTS.some((key) => changed.has(key)) && !changed.has('projection')) return;
     map.getCanvas().setAttribute('aria-label', mapRegionLabel(this.view, this.slice, this.measure, this.projection));
     if (changed.has('view') || changed.has('measure') || changed.has('slice')) this.#setHover(null);
+    const centre = changed.has('view') && this.#dataCentre();
+    if (centre) map.jumpTo({ center: centre }); // a new analysis: face its data (slice steps keep the camera)
     this.#syncLayers();
   }
 
@@ -127,7 +129,7 @@ export class DgGlobeView extends LitElement {
     try {
       maplibregl.setWorkerUrl(workerUrl);
       map = new maplibregl.Map({
-        container, style: offlineStyle(), center: [0, 15], zoom: 1.6,
+        container, style: offlineStyle(), center: this.#dataCentre() ?? [0, 15], zoom: fitZoom(container.clientWidth, container.clientHeight),
         attributionControl: false, maplibreLogo: false, keyboard: false, trackResize: false,
         dragRotate: false, pitchWithRotate: false, touchPitch: false, localIdeographFontFamily: false,
         canvasContextAttributes: { antialias: true },
@@ -159,6 +161,12 @@ export class DgGlobeView extends LitElement {
     this.#syncLayers();
   }
 
+  /** The current slice's spherical centroid as [lon, lat], if it has one. */
+  #dataCentre(): [number, number] | undefined {
+    const metrics = this.view?.slices[this.slice];
+    return metrics && Number.isFinite(metrics.centroidLon) && Number.isFinite(metrics.centroidLat) ? [metrics.centroidLon, metrics.centroidLat] : undefined;
+  }
+
   #fail(): void {
     this._failed = true;
     this.dispatchEvent(new CustomEvent('webgl-unavailable', { bubbles: true, composed: true }));
@@ -169,8 +177,12 @@ export class DgGlobeView extends LitElement {
     return this.#scale.scale;
   }
 
+  #zoom(): number {
+    return this.#map?.getZoom() ?? 0;
+  }
+
   #pointsAllowed(data: SliceLayerData): boolean {
-    return pointDecision(data.points.length, true, this.showAllPoints, this._zoomedIn ? POINT_ZOOM : 0) === 'drawn';
+    return pointDecision(data.points.length, true, this.showAllPoints, this.#zoom()) === 'drawn';
   }
 
   /**
@@ -226,8 +238,8 @@ export class DgGlobeView extends LitElement {
   protected override render(): TemplateResult {
     if (this._failed) return html`<p class="failed" role="status">The WebGL map cannot be shown: this browser gave no WebGL2 context. The equal-area views show the same slices.</p>`;
     const { view, slice, measure } = this;
-    const count = view && slice < view.slices.length ? view.positions.sliceStart[slice + 1] - view.positions.sliceStart[slice] : 0;
-    const decision = pointDecision(count, this.layers.points, this.showAllPoints, this._zoomedIn ? POINT_ZOOM : 0);
+    const count = view && slice < view.slices.length ? slicePointCount(view.positions, slice) : 0;
+    const decision = pointDecision(count, this.layers.points, this.showAllPoints, this.#zoom());
     const notice = pointNotice(decision, count);
     const hover = this._hover;
     return html`
@@ -241,21 +253,9 @@ export class DgGlobeView extends LitElement {
         ${notice ? html`<p role="status">${notice}</p>` : nothing}
         ${this.projection === 'flat' ? html`<p>Web Mercator is not equal-area: cells far from the equator look bigger than they are. Compare areas in the Equal Earth or polar views.</p>` : nothing}
       </div>` : nothing}
-      ${hover && view ? html`<div class="tooltip" style="left:${hover.x + 12}px;top:${hover.y + 12}px">${cellTooltipLines(view, hover.entry).map((line) => html`<div>${line}</div>`)}</div>` : nothing}
+      ${hover && view ? html`<div class="tooltip ${hover.x > this.clientWidth / 2 ? 'west' : ''}" style="left:${hover.x}px;top:${hover.y}px">${cellTooltipLines(view, hover.entry).map((line) => html`<div>${line}</div>`)}</div>` : nothing}
     `;
   }
-
-  static override styles = [unsafeCSS(maplibreCss), globeLegendStyles, css`
-    :host { display: block; position: relative; min-height: 240px; overflow: hidden; font: 12px/1.35 system-ui, sans-serif; color: #1d2328; }
-    .map { position: absolute; inset: 0; background: #fbfcfd; }
-    .zoom { position: absolute; top: 8px; right: 8px; display: flex; flex-direction: column; gap: 2px; }
-    .zoom button { width: 28px; height: 28px; font-size: 16px; line-height: 1; border: 1px solid #9aa4ad; border-radius: 3px; background: #fff; cursor: pointer; }
-    .zoom button:focus-visible { outline: 2px solid #0072b2; outline-offset: 1px; }
-    .notes { position: absolute; right: 8px; bottom: 8px; max-width: min(24em, 50%); display: grid; gap: 4px; }
-    .notes p { margin: 0; padding: 4px 6px; background: rgba(255, 255, 255, 0.9); border-radius: 3px; }
-    .tooltip { position: absolute; pointer-events: none; padding: 4px 6px; background: rgba(255, 255, 255, 0.95); border: 1px solid #9aa4ad; border-radius: 3px; white-space: nowrap; }
-    .failed { margin: 1em; }
-  `];
 }
 
 customElements.define('dg-globe-view', DgGlobeView);

@@ -2,13 +2,13 @@
  * Bringing data: the occurrence table (with a mapping step that shows the detected columns and
  * the first rows), the optional inputs, and session files. All names from files are shown as text.
  */
-import { LitElement, css, html, nothing } from 'lit';
+import { css, html, nothing } from 'lit';
 import { POLE_TABLE_COLUMNS } from '../../src/rotation';
 import { BIN_COLUMNS } from '../../src/time';
 import type { ExtraRole } from '../protocol';
 import type { AppState } from '../state/app-state';
-import type { WorkbenchActions } from '../state/workbench-actions';
 import { panelStyles } from './shared-styles';
+import { WorkbenchPanel } from './workbench-panel';
 
 const EXTRA_INPUTS: ReadonlyArray<{ role: ExtraRole; label: string; accept: string; hint: string }> = [
   { role: 'rotation', label: 'Pole table (rotation model)', accept: '.csv,.tsv,.txt', hint: POLE_TABLE_COLUMNS.join(', ') },
@@ -17,10 +17,8 @@ const EXTRA_INPUTS: ReadonlyArray<{ role: ExtraRole; label: string; accept: stri
   { role: 'bins', label: 'Own time bins', accept: '.csv,.tsv,.txt', hint: BIN_COLUMNS.join(', ') },
 ];
 
-export class DgImportPanel extends LitElement {
-  static override properties = { state: { attribute: false }, actions: { attribute: false }, mapping: { state: true } };
-  declare state: AppState | undefined;
-  declare actions: WorkbenchActions | undefined;
+export class DgImportPanel extends WorkbenchPanel {
+  static override properties = { mapping: { state: true } };
   /** The user's column choices in the mapping step: field → header ('' = none). */
   declare mapping: Record<string, string>;
   /** The preview the mapping belongs to. */
@@ -28,8 +26,6 @@ export class DgImportPanel extends LitElement {
 
   constructor() {
     super();
-    this.state = undefined;
-    this.actions = undefined;
     this.mapping = {};
   }
 

@@ -1,22 +1,12 @@
 /** Rows the reader refused, with the reason for each; the full list (and rows left out of every slice) downloads as rejects.csv. */
-import { LitElement, css, html, nothing } from 'lit';
-import type { AppState } from '../state/app-state';
-import type { WorkbenchActions } from '../state/workbench-actions';
+import { css, html, nothing } from 'lit';
 import { panelStyles } from './shared-styles';
+import { WorkbenchPanel } from './workbench-panel';
 
 /** Rows shown in the page; the download has all of them. */
 const SHOWN_ROWS = 200;
 
-export class DgRejectsPanel extends LitElement {
-  static override properties = { state: { attribute: false }, actions: { attribute: false } };
-  declare state: AppState | undefined;
-  declare actions: WorkbenchActions | undefined;
-
-  constructor() {
-    super();
-    this.state = undefined;
-    this.actions = undefined;
-  }
+export class DgRejectsPanel extends WorkbenchPanel {
 
   static override styles = [panelStyles, css`
     .scroll { max-height: 16rem; overflow: auto; }

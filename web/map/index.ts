@@ -1,6 +1,9 @@
 export { buildCellPolygons, type CellPolygons } from './cell-polygons';
+export { fitZoom, FIT_SHARE, GLOBE_RADIUS_PX_AT_ZOOM_0 } from './globe-camera';
 export { cellLayerId, CELL_LAYER_PREFIX, sliceLayers, type SliceLayerOptions } from './globe-layers';
 export { globeLegend, globeLegendStyles } from './globe-legend';
+export { angleBoundDeg, LIFT_MARGIN_M, liftForCapMetres, liftMatrix } from './globe-lift';
+export { globeViewStyles } from './globe-view-styles';
 export { cellTooltipLines, legendTicks, mapRegionLabel, type LegendTick } from './map-labels';
 export { graticule, GRATICULE_LAYER_ID, GRATICULE_STEP_DEG, GRATICULE_VERTEX_STEP_DEG, offlineStyle } from './offline-style';
 export { POINT_DECISIONS, POINT_ZOOM, pointDecision, pointNotice, type PointDecision } from './point-budget';
