@@ -4,6 +4,7 @@
 import { describe, expect, it } from 'vitest';
 import { countScale } from '../../web/colour/measure-scale';
 import { cellLayerId, sliceLayers } from '../../web/map/globe-layers';
+import { HORIZON_CULL } from '../../web/map/horizon-cull';
 import { prepareSliceLayerData } from '../../web/map/slice-layer-data';
 import { DEFAULT_LAYERS } from '../../web/state/view-options';
 import { fixtureView } from './globe-fixture';
@@ -32,6 +33,15 @@ describe('sliceLayers', () => {
   it('leaves the places layer out when it may not be drawn, so its buffers are freed', () => {
     const layers = sliceLayers(data, { generation: 0, current: true, layers: ALL_ON, includePoints: false });
     expect(layers.some((l) => l.id.startsWith('points'))).toBe(false);
+  });
+
+  it('culls places and sites at the horizon instead of testing them against the globe’s depth', () => {
+    const layers = sliceLayers(data, { generation: 0, current: true, layers: ALL_ON, includePoints: true });
+    for (const id of ['points-g0-s1', 'indicators-g0-s1']) {
+      const layer = layers.find((l) => l.id === id)!;
+      expect(layer.props.extensions).toEqual([HORIZON_CULL]);
+      expect(layer.props.parameters).toMatchObject({ depthCompare: 'always' });
+    }
   });
 
   it('hands deck the prepared buffers themselves, not copies', () => {

@@ -74,3 +74,4 @@ describe('liftForCapMetres', () => {
     expect(closest - R).toBeLessThan(lift);
   });
 });
+

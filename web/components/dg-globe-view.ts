@@ -10,7 +10,7 @@ import * as maplibregl from 'maplibre-gl';
 import workerUrl from 'maplibre-gl/dist/maplibre-gl-worker.mjs?url';
 import { countScale, type CountScale } from '../colour/measure-scale';
 import {
-  cellLayerId, cellTooltipLines, fitZoom, globeLegend, globeViewStyles, mapRegionLabel, offlineStyle, POINT_ZOOM, pointDecision, pointNotice,
+  cellLayerId, cellTooltipLines, fitZoom, globeLegend, globeViewStyles, mapRegionLabel, offlineStyle, pointDecision, pointNotice,
   prepareSliceLayerData, SliceCache, sliceLayers, slicePointCount, type SliceLayerData,
 } from '../map';
 import { IdleWork } from '../figure';
@@ -20,7 +20,7 @@ import { DEFAULT_LAYERS, measureMax, type LayerVisibility } from '../state/view-
 /** Slices whose layers stay loaded (hidden) after being shown, so stepping back re-uploads nothing. */
 const KEPT_SLICES = 24;
 /** Properties that change what deck draws (hover and the rest only change the HTML around it). */
-const LAYER_INPUTS = ['view', 'slice', 'measure', 'layers', 'showAllPoints', '_zoomedIn'] as const;
+const LAYER_INPUTS = ['view', 'slice', 'measure', 'layers', 'showAllPoints', '_zoomLevel'] as const;
 const PICK_RADIUS_PX = 2;
 /** Slices prepared ahead, in idle time, on each side of the current one (the arrow keys' next steps). */
 const PREFETCH_STEPS = [1, -1] as const;
@@ -32,7 +32,7 @@ export class DgGlobeView extends LitElement {
   static override properties = {
     view: { attribute: false }, slice: { type: Number }, measure: { type: String }, layers: { attribute: false },
     projection: { type: String }, showAllPoints: { type: Boolean, attribute: 'show-all-points' },
-    _zoomedIn: { state: true }, _hover: { state: true }, _failed: { state: true },
+    _zoomLevel: { state: true }, _hover: { state: true }, _failed: { state: true },
   };
   declare view: AnalysisView | undefined;
   declare slice: number;
@@ -40,7 +40,8 @@ export class DgGlobeView extends LitElement {
   declare layers: LayerVisibility;
   declare projection: 'globe' | 'flat';
   declare showAllPoints: boolean;
-  declare _zoomedIn: boolean;
+  /** Whole zoom level (rounded down), for the point budget's zoom rule. */
+  declare _zoomLevel: number;
   declare _hover: Hover | null;
   declare _failed: boolean;
 
@@ -62,7 +63,7 @@ export class DgGlobeView extends LitElement {
     this.layers = DEFAULT_LAYERS;
     this.projection = 'globe';
     this.showAllPoints = false;
-    this._zoomedIn = false;
+    this._zoomLevel = 0;
     this._hover = null;
     this._failed = false;
   }
@@ -146,8 +147,8 @@ export class DgGlobeView extends LitElement {
       this.#applyProjection(map);
     });
     map.on('zoom', () => {
-      const zoomedIn = map.getZoom() >= POINT_ZOOM;
-      if (zoomedIn !== this._zoomedIn) this._zoomedIn = zoomedIn;
+      const level = Math.max(0, Math.floor(map.getZoom()));
+      if (level !== this._zoomLevel) this._zoomLevel = level;
     });
     map.on('movestart', () => this.#setHover(null));
     // Deck picks under the pointer itself (it also drives the highlight); a tap arrives as a click.
@@ -177,12 +178,8 @@ export class DgGlobeView extends LitElement {
     return this.#scale.scale;
   }
 
-  #zoom(): number {
-    return this.#map?.getZoom() ?? 0;
-  }
-
   #pointsAllowed(data: SliceLayerData): boolean {
-    return pointDecision(data.points.length, true, this.showAllPoints, this.#zoom()) === 'drawn';
+    return pointDecision(data.points.length, true, this.showAllPoints, this._zoomLevel) === 'drawn';
   }
 
   /**
@@ -239,7 +236,7 @@ export class DgGlobeView extends LitElement {
     if (this._failed) return html`<p class="failed" role="status">The WebGL map cannot be shown: this browser gave no WebGL2 context. The equal-area views show the same slices.</p>`;
     const { view, slice, measure } = this;
     const count = view && slice < view.slices.length ? slicePointCount(view.positions, slice) : 0;
-    const decision = pointDecision(count, this.layers.points, this.showAllPoints, this.#zoom());
+    const decision = pointDecision(count, this.layers.points, this.showAllPoints, this._zoomLevel);
     const notice = pointNotice(decision, count);
     const hover = this._hover;
     return html`

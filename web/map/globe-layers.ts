@@ -6,6 +6,7 @@ import type { Color, Layer } from '@deck.gl/core';
 import { GeoJsonLayer, PathLayer, ScatterplotLayer, SolidPolygonLayer } from '@deck.gl/layers';
 import { OVERLAY_COLOURS } from '../colour/layer-colours';
 import type { LayerVisibility } from '../state/view-options';
+import { HORIZON_CULL } from './horizon-cull';
 import { GRATICULE_LAYER_ID } from './offline-style';
 import type { SliceLayerData } from './slice-layer-data';
 
@@ -30,6 +31,8 @@ const CELL_OPACITY = 0.85;
  * sit at different lifts (see globe-lift.ts) and must stack in drawing order, not by altitude.
  */
 const PARAMETERS = { depthWriteEnabled: false, depthCompare: 'less-equal' } as const;
+/** Discs facing the camera are culled at the horizon instead (see horizon-cull.ts). */
+const BILLBOARD_PARAMETERS = { depthWriteEnabled: false, depthCompare: 'always' } as const;
 const HIGHLIGHT: number[] = [255, 255, 255, 110];
 const HULL: Color = [...OVERLAY_COLOURS.hull];
 const TREE: Color = [...OVERLAY_COLOURS.spanningTree];
@@ -37,6 +40,9 @@ const POINTS: Color = [...OVERLAY_COLOURS.points];
 const POLYGON_FILL: Color = [...OVERLAY_COLOURS.polygons, 160];
 const POLYGON_EDGE: Color = [...OVERLAY_COLOURS.polygonEdge];
 const SITE_EDGE: Color = [255, 255, 255];
+const POINT_RADIUS_PX = 1.8;
+const SITE_RADIUS_PX = 4;
+const SITE_EDGE_PX = 1;
 
 export function cellLayerId(generation: number, slice: number): string {
   return `${CELL_LAYER_PREFIX}-g${generation}-s${slice}`;
@@ -69,14 +75,14 @@ export function sliceLayers(data: SliceLayerData, options: SliceLayerOptions): L
   }));
   if (data.indicators) {
     out.push(new ScatterplotLayer<null>({
-      id: `indicators-${tag}`, data: data.indicators, visible: current && on.indicators, parameters: PARAMETERS,
-      radiusUnits: 'pixels', getRadius: 4, stroked: true, getLineColor: SITE_EDGE, lineWidthUnits: 'pixels', getLineWidth: 1,
+      id: `indicators-${tag}`, data: data.indicators, visible: current && on.indicators, parameters: BILLBOARD_PARAMETERS, extensions: [HORIZON_CULL],
+      radiusUnits: 'pixels', getRadius: SITE_RADIUS_PX, stroked: true, getLineColor: SITE_EDGE, lineWidthUnits: 'pixels', getLineWidth: SITE_EDGE_PX,
     }));
   }
   if (options.includePoints) {
     out.push(new ScatterplotLayer<null>({
-      id: `points-${tag}`, data: data.points, visible: current && on.points, parameters: PARAMETERS,
-      radiusUnits: 'pixels', getRadius: 1.8, getFillColor: POINTS,
+      id: `points-${tag}`, data: data.points, visible: current && on.points, parameters: BILLBOARD_PARAMETERS, extensions: [HORIZON_CULL],
+      radiusUnits: 'pixels', getRadius: POINT_RADIUS_PX, getFillColor: POINTS,
     }));
   }
   return out;

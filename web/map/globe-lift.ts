@@ -32,3 +32,4 @@ export function liftForCapMetres(capDeg: number): number {
 export function liftMatrix(metres: number): Float64Array {
   return Float64Array.of(1, 0, 0, 0, 0, 1, 0, 0, 0, 0, 1, 0, 0, 0, metres, 1);
 }
+

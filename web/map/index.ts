@@ -4,6 +4,7 @@ export { cellLayerId, CELL_LAYER_PREFIX, sliceLayers, type SliceLayerOptions } f
 export { globeLegend, globeLegendStyles } from './globe-legend';
 export { angleBoundDeg, LIFT_MARGIN_M, liftForCapMetres, liftMatrix } from './globe-lift';
 export { globeViewStyles } from './globe-view-styles';
+export { HORIZON_CULL, HorizonCullExtension } from './horizon-cull';
 export { cellTooltipLines, legendTicks, mapRegionLabel, type LegendTick } from './map-labels';
 export { graticule, GRATICULE_LAYER_ID, GRATICULE_STEP_DEG, GRATICULE_VERTEX_STEP_DEG, offlineStyle } from './offline-style';
 export { POINT_DECISIONS, POINT_ZOOM, pointDecision, pointNotice, type PointDecision } from './point-budget';
