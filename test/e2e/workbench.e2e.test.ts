@@ -178,6 +178,7 @@ describe('importing a table', () => {
       expect(await field(page, 'occurrences')).toBe('4');
       expect(dialogs).toEqual([]);
       expect(opened.foreignRequests()).toEqual([]);
+      await waitForCanvasDrawn(page, 'dg-globe-view canvas', { minPixels: 2000 });
       saveScreenshot('import-small-table', await page.screenshot());
     } finally {
       await opened.close();
