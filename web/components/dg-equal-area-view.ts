@@ -4,7 +4,8 @@
  * (view, projection) in reference pixels (web/figure/projected-view.ts) and prepared in idle
  * time, so a slice change only draws; a resize only changes the frame.
  */
-import { LitElement, css, html, nothing, type PropertyValues } from 'lit';
+import { SliceMapElement } from './slice-map-element';
+import { css, html, nothing, type PropertyValues } from 'lit';
 import { styleMap } from 'lit/directives/style-map.js';
 import { scaleGradientCss } from '../colour/measure-scale';
 import {
@@ -13,7 +14,6 @@ import {
   type EqualAreaProjection, type MapFrame, type MapLegend, type MapPicture,
 } from '../figure';
 import type { AnalysisView, Measure } from '../protocol';
-import { DEFAULT_LAYERS, type LayerVisibility } from '../state/view-options';
 
 /** Figure width when the map has not been laid out, and the least one, CSS px. */
 const FIGURE_WIDTH: Readonly<Record<EqualAreaProjection, number>> = { 'equal-earth': 960, 'polar-north': 720, 'polar-south': 720 };
@@ -25,20 +25,12 @@ const PNG_RATIO = 2;
 
 interface Tip { readonly x: number; readonly y: number; readonly text: string }
 
-export class DgEqualAreaView extends LitElement {
+export class DgEqualAreaView extends SliceMapElement {
   static override properties = {
-    view: { attribute: false },
-    slice: { type: Number },
-    measure: { type: String },
-    layers: { attribute: false },
     projection: { type: String },
     notice: { type: String },
     tip: { state: true },
   };
-  declare view: AnalysisView | undefined;
-  declare slice: number;
-  declare measure: Measure;
-  declare layers: LayerVisibility;
   declare projection: EqualAreaProjection;
   /** Shown above the map, e.g. why the WebGL views are unavailable. */
   declare notice: string;
@@ -57,10 +49,6 @@ export class DgEqualAreaView extends LitElement {
 
   constructor() {
     super();
-    this.view = undefined;
-    this.slice = 0;
-    this.measure = 'occurrences';
-    this.layers = DEFAULT_LAYERS;
     this.projection = 'equal-earth';
     this.notice = '';
     this.tip = undefined;

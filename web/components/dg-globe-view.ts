@@ -3,9 +3,10 @@
  * deck.gl draws one slice's cells, places, hull, spanning tree, base polygons and indicators into
  * the same WebGL context (interleaved), so one canvas holds the whole picture.
  */
+import { SliceMapElement } from './slice-map-element';
 import type { Layer, PickingInfo } from '@deck.gl/core';
 import { MapLibreOverlay } from '@deck.gl/maplibre';
-import { html, LitElement, nothing, type PropertyValues, type TemplateResult } from 'lit';
+import { html, nothing, type PropertyValues, type TemplateResult } from 'lit';
 import * as maplibregl from 'maplibre-gl';
 import workerUrl from 'maplibre-gl/dist/maplibre-gl-worker.mjs?url';
 import { countScale, type CountScale } from '../colour/measure-scale';
@@ -15,7 +16,7 @@ import {
 } from '../map';
 import { IdleWork } from '../figure';
 import type { AnalysisView, Measure } from '../protocol';
-import { DEFAULT_LAYERS, measureMax, type LayerVisibility } from '../state/view-options';
+import { measureMax } from '../state/view-options';
 
 /** Slices whose layers stay loaded (hidden) after being shown, so stepping back re-uploads nothing. */
 const KEPT_SLICES = 24;
@@ -27,17 +28,12 @@ const PREFETCH_STEPS = [1, -1] as const;
 
 interface Hover { readonly x: number; readonly y: number; readonly entry: number }
 
-export class DgGlobeView extends LitElement {
+export class DgGlobeView extends SliceMapElement {
   static override styles = globeViewStyles;
   static override properties = {
-    view: { attribute: false }, slice: { type: Number }, measure: { type: String }, layers: { attribute: false },
     projection: { type: String }, showAllPoints: { type: Boolean, attribute: 'show-all-points' },
     _zoomLevel: { state: true }, _hover: { state: true }, _failed: { state: true },
   };
-  declare view: AnalysisView | undefined;
-  declare slice: number;
-  declare measure: Measure;
-  declare layers: LayerVisibility;
   declare projection: 'globe' | 'flat';
   declare showAllPoints: boolean;
   /** Whole zoom level (rounded down), for the point budget's zoom rule. */
@@ -57,10 +53,6 @@ export class DgGlobeView extends LitElement {
 
   constructor() {
     super();
-    this.view = undefined;
-    this.slice = 0;
-    this.measure = 'occurrences';
-    this.layers = DEFAULT_LAYERS;
     this.projection = 'globe';
     this.showAllPoints = false;
     this._zoomLevel = 0;
