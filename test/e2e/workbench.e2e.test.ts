@@ -178,6 +178,16 @@ describe('importing a table', () => {
       expect(await field(page, 'occurrences')).toBe('4');
       expect(dialogs).toEqual([]);
       expect(opened.foreignRequests()).toEqual([]);
+      // Pointing at a cell lists its taxa, as text. The table's first occupied slice holds cell
+      // entries 0–3 (entries count from the oldest slice), one of them with the hostile name.
+      const listed: string[] = [];
+      for (let entry = 0; entry < 4; entry++) {
+        await page.locator('dg-globe-view').evaluate((map, detail) => map.dispatchEvent(new CustomEvent('cell-hover', { detail, bubbles: true, composed: true })), { slice: 72, entry });
+        await expect.poll(() => page.locator('dg-cell-details li').count()).toBeGreaterThan(0);
+        listed.push(...(await page.locator('dg-cell-details li').allTextContents()));
+      }
+      expect(listed.sort()).toEqual(['<img src=x onerror=alert(1)>', 'Alphaxis', 'Alphaxis', 'Betanid']);
+      expect(await page.locator('dg-cell-details img').count()).toBe(0);
       await waitForCanvasDrawn(page, 'dg-globe-view canvas', { minPixels: 2000 });
       saveScreenshot('import-small-table', await page.screenshot());
     } finally {
@@ -205,6 +215,44 @@ describe('a browser without WebGL', () => {
       const { png } = await waitForCanvasDrawn(page, 'dg-equal-area-view canvas', { minPixels: 5000 });
       saveScreenshot('no-webgl', png);
       expect(opened.consoleErrors).toEqual([]);
+    } finally {
+      await opened.close();
+    }
+  });
+});
+
+describe('the page address', () => {
+  test('reopens the view it holds: settings, slice and map', async () => {
+    const opened = await openPage(browser, `${app.url}#bins=stages&grid=healpix%3A16&measure=taxa&slice=Campanian&map=polar-south`);
+    try {
+      const { page } = opened;
+      await waitReady(page);
+      expect(await field(page, 'name')).toBe('Campanian');
+      expect(await page.locator('dg-equal-area-view').count()).toBe(1);
+      expect(await page.locator('dg-display-controls select[name="measure"]').inputValue()).toBe('taxa');
+      const { rows } = await cliSlices('--bins', 'stages', '--grid', 'healpix:16');
+      expectSameSlice(await pageSlice(page), rows.get('Campanian'));
+    } finally {
+      await opened.close();
+    }
+  });
+});
+
+describe('dropping a file on the page', () => {
+  test('starts the import with the mapping step', async () => {
+    const opened = await openPage(browser, app.url);
+    try {
+      const { page } = opened;
+      await waitReady(page);
+      const text = readFileSync('test/e2e/fixtures/small-import.csv', 'utf8');
+      const transfer = await page.evaluateHandle((csv) => {
+        const data = new DataTransfer();
+        data.items.add(new File([csv], 'dropped.csv', { type: 'text/csv' }));
+        return data;
+      }, text);
+      await page.dispatchEvent('dg-app', 'dragover', { dataTransfer: transfer });
+      await page.dispatchEvent('dg-app', 'drop', { dataTransfer: transfer });
+      await expect.poll(async () => (await page.locator('dg-import-panel section.mapping').textContent()) ?? '').toContain('dropped.csv');
     } finally {
       await opened.close();
     }

@@ -80,15 +80,30 @@ export class DgApp extends LitElement {
     .below { padding: 0.4rem 0.8rem; border-top: 1px solid #dde3e8; background: #fff; }
   `];
 
+  private readonly onDragOver = (event: DragEvent): void => {
+    if (event.dataTransfer?.types.includes('Files') === true) event.preventDefault(); // allows the drop
+  };
+
+  private readonly onDrop = (event: DragEvent): void => {
+    const file = event.dataTransfer?.files[0];
+    if (file === undefined) return;
+    event.preventDefault(); // the browser would otherwise open the file in place of the page
+    void this.actions.dropFile(file);
+  };
+
   override connectedCallback(): void {
     super.connectedCallback();
     window.addEventListener('keydown', this.onKey);
+    window.addEventListener('dragover', this.onDragOver);
+    window.addEventListener('drop', this.onDrop);
     void this.actions.start(location.hash);
   }
 
   override disconnectedCallback(): void {
     super.disconnectedCallback();
     window.removeEventListener('keydown', this.onKey);
+    window.removeEventListener('dragover', this.onDragOver);
+    window.removeEventListener('drop', this.onDrop);
     this.worker.terminate();
   }
 

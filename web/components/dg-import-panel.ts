@@ -66,6 +66,7 @@ export class DgImportPanel extends WorkbenchPanel {
     const table = state.table;
     return html`
       <h2>Data</h2>
+      <p class="hint">Pick a file below or drop it anywhere on the page.</p>
       <label>Occurrence table
         <input type="file" name="occurrences" accept=".csv,.tsv,.txt" @change=${(e: Event) => this.picked(e, (f) => void this.actions?.pickTable(f))}>
       </label>

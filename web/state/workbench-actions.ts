@@ -59,6 +59,17 @@ export class WorkbenchActions {
     });
   }
 
+  /**
+   * A file dropped on the page, by its name: GeoJSON is base polygons, JSON a session file,
+   * anything else an occurrence table (which goes through the mapping step).
+   */
+  async dropFile(file: File): Promise<void> {
+    const name = file.name.toLowerCase();
+    if (name.endsWith('.geojson')) await this.loadExtra('polygons', file);
+    else if (name.endsWith('.json')) await this.openSession(file);
+    else await this.pickTable(file);
+  }
+
   /** Second step: read the whole table with the confirmed columns, then analyse it. */
   async confirmImport(mapping: Readonly<Record<string, string>>): Promise<void> {
     const pending = this.state.pendingImport;
