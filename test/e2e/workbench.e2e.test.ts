@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { runCli } from '../cli/run-cli';
-import { countDrawnPixels, launchBrowser, openPage, saveScreenshot, startApp, waitForCanvasDrawn, type App, type OpenedPage } from './harness';
+import { countDrawnPixels, launchBrowser, openPage, runAxe, saveScreenshot, startApp, waitForCanvasDrawn, type App, type OpenedPage } from './harness';
 
 const DEMO = 'assets/demo';
 let app: App;
@@ -145,6 +145,7 @@ describe('the workbench with the demo scenario', () => {
     saveScreenshot('curves', curves);
     expect((await countDrawnPixels(page, curves)).drawn).toBeGreaterThan(3000);
     saveScreenshot('workbench-equal-area', await page.screenshot());
+    expect(await runAxe(page)).toEqual([]);
   });
 });
 
@@ -177,6 +178,7 @@ describe('importing a table', () => {
       expect(await field(page, 'name')).toBe('Cenomanian');
       expect(await field(page, 'occurrences')).toBe('4');
       expect(dialogs).toEqual([]);
+      expect(await runAxe(page)).toEqual([]);
       expect(opened.foreignRequests()).toEqual([]);
       // Pointing at a cell lists its taxa, as text. The table's first occupied slice holds cell
       // entries 0–3 (entries count from the oldest slice), one of them with the hostile name.
