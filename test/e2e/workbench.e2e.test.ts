@@ -98,6 +98,18 @@ describe('the workbench with the demo scenario', () => {
     const here = await field(page, 'name');
     await page.keyboard.press('ArrowLeft');
     await expect.poll(() => field(page, 'name')).not.toBe(here);
+    // Inside a form field the arrow keys belong to the field (here they change the rule, which
+    // recomputes and keeps the slice); they do not step the slice.
+    const inField = await field(page, 'name');
+    const assign = page.locator('dg-frame-controls select#assign');
+    await assign.focus();
+    await page.keyboard.press('ArrowRight');
+    await page.waitForTimeout(300);
+    await waitReady(page);
+    expect(await field(page, 'name')).toBe(inField);
+    await assign.selectOption('midpoint');
+    await waitReady(page);
+    await assign.blur();
     await page.keyboard.press('End');
     const last = await field(page, 'name');
     expect(Number(rows.get(last)?.occurrences)).toBeGreaterThan(0);
