@@ -192,11 +192,15 @@ describe('importing a table', () => {
       expect(dialogs).toEqual([]);
       expect(await runAxe(page)).toEqual([]);
       expect(opened.foreignRequests()).toEqual([]);
-      // Pointing at a cell lists its taxa, as text. The table's first occupied slice holds cell
-      // entries 0–3 (entries count from the oldest slice), one of them with the hostile name.
+      // Choosing a cell (the keyboard's way to what pointing at it on the map does) lists its
+      // taxa, as text. The slice's four cells are entries 0–3 (entries count from the oldest
+      // slice); one holds the hostile name.
       const listed: string[] = [];
+      const picker = page.locator('dg-cell-details select[name="cell"]');
+      expect(await picker.locator('option').count()).toBe(1 + 4);
       for (let entry = 0; entry < 4; entry++) {
-        await page.locator('dg-globe-view').evaluate((map, detail) => map.dispatchEvent(new CustomEvent('cell-hover', { detail, bubbles: true, composed: true })), { slice: 72, entry });
+        await picker.selectOption(String(entry));
+        await expect.poll(async () => (await page.locator('dg-cell-details h2').textContent()) ?? '').toContain(`Cell ${await picker.locator(`option[value="${entry}"]`).evaluate((o) => o.textContent?.split(':')[0])}`);
         await expect.poll(() => page.locator('dg-cell-details li').count()).toBeGreaterThan(0);
         listed.push(...(await page.locator('dg-cell-details li').allTextContents()));
       }

@@ -147,15 +147,14 @@ export class DgApp extends LitElement {
             ${s.busy.cancelId === undefined ? nothing : html`<button @click=${() => a.cancel()}>Cancel</button>`}
           </span>`}
       </header>
-      <div class="layout">
+      <div class="layout" @cell-hover=${(e: CustomEvent<{ slice: number; entry: number } | null>) => void a.focusCell(e.detail)}>
         <aside aria-label="Data and settings">
           <dg-import-panel .state=${s} .actions=${a}></dg-import-panel>
           <dg-frame-controls .state=${s} .actions=${a}></dg-frame-controls>
           <dg-display-controls .state=${s} .actions=${a}></dg-display-controls>
           <dg-export-menu .state=${s} .actions=${a} @figure-export=${(e: CustomEvent<{ figure: Figure; format: FigureFormat }>) => void this.exportFigure(e.detail.figure, e.detail.format)}></dg-export-menu>
         </aside>
-        <main @slice-select=${(e: CustomEvent<{ slice: number }>) => a.setSlice(e.detail.slice)}
-          @cell-hover=${(e: CustomEvent<{ slice: number; entry: number } | null>) => void a.focusCell(e.detail)}>
+        <main @slice-select=${(e: CustomEvent<{ slice: number }>) => a.setSlice(e.detail.slice)}>
           ${s.problem === undefined ? nothing : html`<div class="problem-bar" role="alert"><p>${s.problem}</p><button @click=${() => a.clearProblem()} aria-label="Dismiss message">×</button></div>`}
           <div class="strip"><dg-time-strip .slices=${s.view?.slices ?? []} .periods=${s.view?.periods ?? []} .slice=${s.slice}
             .range=${range} .wholeScale=${s.wholeScale} @whole-scale=${(e: CustomEvent<{ wholeScale: boolean }>) => a.setWholeScale(e.detail.wholeScale)}></dg-time-strip></div>
@@ -173,7 +172,7 @@ export class DgApp extends LitElement {
         </main>
         <div class="side" role="complementary" aria-label="Current slice">
           <dg-slice-summary .view=${s.view} .slice=${s.slice}></dg-slice-summary>
-          <dg-cell-details .view=${s.view} .cellFocus=${s.cell}></dg-cell-details>
+          <dg-cell-details .view=${s.view} .slice=${s.slice} .cellFocus=${s.cell}></dg-cell-details>
           <dg-latitude-panel ${ref(this.latitude)} .view=${s.view} .slice=${s.slice}></dg-latitude-panel>
         </div>
       </div>`;

@@ -6,15 +6,19 @@ import { panelStyles } from './shared-styles';
 
 /** Taxa listed before "and N more". */
 const LISTED_TAXA = 60;
+/** Cells offered in the keyboard picker, most occurrences first. */
+const PICKABLE_CELLS = 300;
 
 export class DgCellDetails extends LitElement {
-  static override properties = { view: { attribute: false }, cellFocus: { attribute: false } };
+  static override properties = { view: { attribute: false }, slice: { type: Number }, cellFocus: { attribute: false } };
   declare view: AnalysisView | undefined;
+  declare slice: number;
   declare cellFocus: CellFocus | undefined;
 
   constructor() {
     super();
     this.view = undefined;
+    this.slice = 0;
     this.cellFocus = undefined;
   }
 
@@ -22,9 +26,32 @@ export class DgCellDetails extends LitElement {
     ul { columns: 2; margin: 0.3rem 0 0; padding-left: 1rem; font-size: 0.85em; font-style: italic; }
   `];
 
+  /** The same as pointing at the cell on a map: for keyboards and screen readers. */
+  private renderPicker(view: AnalysisView) {
+    const from = view.cells.sliceStart[this.slice], to = view.cells.sliceStart[this.slice + 1];
+    if (!(to > from)) return nothing;
+    const entries = Array.from({ length: to - from }, (_, k) => from + k)
+      .sort((a, b) => view.cells.occurrences[b] - view.cells.occurrences[a]).slice(0, PICKABLE_CELLS);
+    const chosen = this.cellFocus?.slice === this.slice ? this.cellFocus.entry : -1;
+    return html`<label>Cell <select name="cell" @change=${(e: Event) => {
+      const entry = Number((e.target as HTMLSelectElement).value);
+      const detail = entry < 0 ? null : { slice: this.slice, entry };
+      this.dispatchEvent(new CustomEvent('cell-hover', { detail, bubbles: true, composed: true }));
+    }}>
+      <option value="-1" ?selected=${chosen < 0}>choose (most occurrences first)</option>
+      ${entries.map((k) => html`<option value=${k} ?selected=${k === chosen}>${view.cells.cell[k]}: ${view.cells.occurrences[k]} occurrences</option>`)}
+    </select></label>`;
+  }
+
   override render() {
     const { view, cellFocus: focus } = this;
-    if (view === undefined || focus === undefined) return html`<p class="hint">Point at or tap an occupied cell to see its counts and taxa.</p>`;
+    if (view === undefined) return nothing;
+    return html`${this.renderPicker(view)}${focus === undefined
+      ? html`<p class="hint">Point at or tap an occupied cell on the map, or choose one above, to see its counts and taxa.</p>`
+      : this.renderCell(view, focus)}`;
+  }
+
+  private renderCell(view: AnalysisView, focus: CellFocus) {
     const k = focus.entry;
     const shape = view.cells.shape[k];
     const lon = view.shapes.centre[2 * shape], lat = view.shapes.centre[2 * shape + 1];
