@@ -62,6 +62,7 @@ export class DgApp extends LitElement {
     :host { display: grid; height: 100vh; grid-template-rows: auto 1fr; }
     header { display: flex; align-items: center; gap: 1rem; padding: 0.4rem 0.8rem; background: #14324a; color: #fff; }
     header h1 { font-size: 1.05rem; margin: 0; font-weight: 600; letter-spacing: 0.02em; }
+    header .tagline { color: #cfe0ee; font-size: 0.85em; }
     header .busy { display: flex; align-items: center; gap: 0.5rem; font-size: 0.85em; }
     header progress { width: 12rem; }
     header button { background: #fff; color: #14324a; }
@@ -139,7 +140,7 @@ export class DgApp extends LitElement {
     return html`
       <header>
         <h1>driftgrid</h1>
-        <span class="hint" style="color:#cfe0ee">fossil occurrences on the palaeoglobe, slice by slice</span>
+        <span class="tagline">fossil occurrences on the palaeoglobe, slice by slice</span>
         ${s.busy === undefined ? nothing : html`
           <span class="busy" role="status">
             ${s.busy.label}
