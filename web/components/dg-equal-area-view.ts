@@ -77,7 +77,7 @@ export class DgEqualAreaView extends SliceMapElement {
     return html`
       ${this.notice ? html`<p class="notice" role="status">${this.notice}</p>` : nothing}<slot name="notice"></slot>
       <div class="body">
-        <div class="map" @pointermove=${this.#onPointerMove} @pointerleave=${this.#onPointerLeave}>
+        <div class="map" @pointermove=${this.#onPointerMove} @pointerdown=${this.#onPointerMove} @pointerleave=${this.#onPointerLeave}>
           <canvas role="img" aria-label=${mapDescription(this.view, this.slice, this.measure, this.projection)}></canvas>
           ${tip === undefined ? nothing : html`<div class="tip" role="tooltip" style=${styleMap({ left: `${tip.x}px`, top: `${tip.y}px` })}>${tip.text}</div>`}
         </div>
@@ -215,6 +215,7 @@ export class DgEqualAreaView extends SliceMapElement {
     });
   }
 
+  /** Pointer moves, and taps (a touch gives a pointerdown without moves), find the cell under them. */
   #onPointerMove = (event: PointerEvent): void => {
     const view = this.view;
     const target = event.currentTarget;
