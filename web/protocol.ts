@@ -29,8 +29,7 @@ export const MEASURES = ['occurrences', 'collections', 'taxa'] as const;
 export type Measure = (typeof MEASURES)[number];
 
 /** Optional inputs besides the occurrence table. */
-export const EXTRA_ROLES = ['rotation', 'polygons', 'indicators', 'bins'] as const;
-export type ExtraRole = (typeof EXTRA_ROLES)[number];
+export type ExtraRole = 'rotation' | 'polygons' | 'indicators' | 'bins';
 
 /** A file the worker reads: one the user picked, or one served by the app itself (the demo). */
 export type Source =

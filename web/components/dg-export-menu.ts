@@ -4,8 +4,7 @@ import { EXPORT_FILES } from '../protocol';
 import { panelStyles } from './shared-styles';
 import { WorkbenchPanel } from './workbench-panel';
 
-export const FIGURES = ['map', 'curves', 'latitude'] as const;
-export type Figure = (typeof FIGURES)[number];
+export type Figure = 'map' | 'curves' | 'latitude';
 export type FigureFormat = 'svg' | 'png';
 
 const FIGURE_LABELS: Readonly<Record<Figure, string>> = { map: 'Map', curves: 'Curves', latitude: 'Latitude panel' };

@@ -8,9 +8,9 @@ import { EARTH_RADIUS_KM } from '../../src/sphere';
 import { panelStyles } from './shared-styles';
 
 /** Below this many distinct positions every footprint measure is noisy (our rule of thumb; README "Read the numbers with care"). */
-export const FEW_POSITIONS = 10;
+const FEW_POSITIONS = 10;
 /** A hull covering more than this share of the sphere is governed by a few outlying sites. */
-export const WIDE_HULL_SHARE = 0.35;
+const WIDE_HULL_SHARE = 0.35;
 const SPHERE_KM2 = 4 * Math.PI * EARTH_RADIUS_KM ** 2;
 
 const number = (v: number, decimals = 0): string =>

@@ -19,7 +19,7 @@ const PATH_STEP_DEG = 1;
 /** Longest step along cell outlines, degrees (cells are drawn, not measured, from these). */
 const CELL_STEP_DEG = 2;
 /** Width of the latitude panel's bands, degrees. */
-export const LATITUDE_BAND_DEG = 10;
+const LATITUDE_BAND_DEG = 10;
 /** Indicator kinds are coded in a byte. */
 const MAX_INDICATOR_KINDS = 255;
 
