@@ -7,7 +7,7 @@ import { groupBySlice } from './footprint/group-by-slice';
 import { slicePositions } from './footprint/slice-positions';
 import { tallyCells, type CellTallies } from './footprint/cell-tallies';
 import { gather } from './footprint/gather';
-import { measureFootprint, type Footprint } from './footprint/slice-footprint';
+import { measureFootprintWithShapes, type Footprint, type FootprintShapes } from './footprint/slice-footprint';
 import { DEFAULT_PLACEMENT, placeOccurrences, type Placement, type PlacementSettings } from './placement/place-occurrences';
 import { collectExclusions, type Exclusions } from './placement/exclusions';
 import type { RotationModel } from './rotation/rotation-model';
@@ -53,6 +53,8 @@ export interface AnalysisResult {
   readonly collectionsArePositions: boolean;
   /** Per slice, the distinct palaeopositions (degrees) the footprint was measured over. */
   readonly places: { readonly lat: readonly Float64Array[]; readonly lon: readonly Float64Array[] };
+  /** Per slice, the hull and spanning tree the footprint was measured from (indices into `places`). */
+  readonly shapes: readonly FootprintShapes[];
   /** Placed rows grouped by slice: rows of slice s are order[start[s]] … order[start[s + 1] − 1]. */
   readonly rowsBySlice: { readonly order: Uint32Array; readonly start: Uint32Array };
 }
@@ -89,6 +91,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
 
   const inOrder = identityOrder(order.length);
   const slices: SliceMetrics[] = [];
+  const shapes: FootprintShapes[] = [];
   let cellEntry = 0;
   for (let s = 0; s < sliceCount; s++) {
     const from = start[s];
@@ -98,6 +101,8 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
       occupied++;
       cellEntry++;
     }
+    const measured = measureFootprintWithShapes(places.lat[s], places.lon[s]);
+    shapes.push(measured.shapes);
     slices.push({
       name: scale.names[s],
       baseMa: scale.baseMa[s],
@@ -106,7 +111,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
       collections: collectionCounter.count(rows.collection, inOrder, from, to),
       taxa: taxonCounter.count(rows.taxon, inOrder, from, to),
       cells: occupied,
-      ...measureFootprint(places.lat[s], places.lon[s]),
+      ...measured.footprint,
     });
   }
 
@@ -120,6 +125,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     exclusions,
     collectionsArePositions,
     places: { lat: places.lat, lon: places.lon },
+    shapes,
     rowsBySlice: { order, start },
   };
 }

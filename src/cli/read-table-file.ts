@@ -1,7 +1,7 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
 import {
-  TableReadError, invalidUtf8Offset, createCsvScanner, createOccurrenceReader, detach, recordFields, sniffBytes,
+  InvalidUtf8Error, LineCounter, StrictTextDecoder, TableReadError, createCsvScanner, createOccurrenceReader, detach, recordFields,
   type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
@@ -93,40 +93,22 @@ export async function scanRecordsFile(
 /** Streams a file's text, chunk by chunk, refusing what is not UTF-8 text. */
 async function streamText(path: string, push: (text: string) => void, options: StreamOptions): Promise<void> {
   const totalBytes = await stat(path).then((s) => s.size, (err: unknown) => { throw cannotOpen(path, err); });
-  const decoder = new TextDecoder('utf-8', { fatal: true });
+  const decoder = new StrictTextDecoder();
   const stream = createReadStream(path, { flags: 'r', highWaterMark: options.chunkBytes ?? READ_CHUNK_BYTES, signal: options.signal });
-  let offset = 0;
-  let previous: Uint8Array = new Uint8Array(0);
   try {
     for await (const chunk of stream as AsyncIterable<Buffer>) {
-      if (offset === 0) {
-        const problem = sniffBytes(chunk);
-        if (problem !== undefined) throw new TableReadError(problem);
-      }
+      const text = decoder.decode(chunk);
       options.onChunk?.(chunk);
-      let text: string;
-      try {
-        text = decoder.decode(chunk, { stream: true });
-      } catch {
-        throw await invalidUtf8(path, previous, chunk, offset, false);
-      }
       push(text);
-      offset += chunk.length;
-      previous = chunk;
-      options.onBytes?.(offset, totalBytes);
+      options.onBytes?.(decoder.bytesRead, totalBytes);
     }
+    push(decoder.end());
   } catch (err) {
     stream.destroy();
+    if (err instanceof InvalidUtf8Error) throw err.atLine(await lineAtByte(path, err.byte));
     if (err instanceof TableReadError || (err instanceof Error && err.name === 'AbortError')) throw err;
     throw cannotOpen(path, err);
   }
-  let rest: string;
-  try {
-    rest = decoder.decode();
-  } catch {
-    throw await invalidUtf8(path, previous, new Uint8Array(0), offset, true);
-  }
-  push(rest);
 }
 
 function cannotOpen(path: string, err: unknown): TableReadError {
@@ -134,31 +116,10 @@ function cannotOpen(path: string, err: unknown): TableReadError {
   return new TableReadError(`cannot read ${path}: ${why}`);
 }
 
-/**
- * The decoder failed on `chunk` (which starts at byte `offset`); the ill-formed sequence may have
- * begun in the tail of the previous chunk. Finds its byte offset and the line it is on.
- */
-async function invalidUtf8(
-  path: string, previous: Uint8Array, chunk: Uint8Array, offset: number, final: boolean,
-): Promise<TableReadError> {
-  const byte = invalidUtf8Offset(previous, chunk, offset, final);
-  const line = await lineAtByte(path, byte);
-  return new TableReadError(`line ${line}: invalid UTF-8 at byte ${byte} (counting from 0); save the file as UTF-8`, line);
-}
-
-/** Line (from 1) holding byte `byte`: line breaks before it are LF, CRLF or a lone CR. */
+/** Line (from 1) holding byte `byte` of the file. */
 async function lineAtByte(path: string, byte: number): Promise<number> {
-  let line = 1;
-  let lastWasCr = false;
-  if (byte === 0) return line;
-  for await (const chunk of createReadStream(path, { flags: 'r', start: 0, end: byte - 1 }) as AsyncIterable<Buffer>) {
-    for (let i = 0; i < chunk.length; i++) {
-      const c = chunk[i];
-      if (c === 10) {
-        if (!lastWasCr) line++;
-      } else if (c === 13) line++;
-      lastWasCr = c === 13;
-    }
-  }
-  return line;
+  const lines = new LineCounter();
+  if (byte === 0) return lines.line;
+  for await (const chunk of createReadStream(path, { flags: 'r', start: 0, end: byte - 1 }) as AsyncIterable<Buffer>) lines.push(chunk);
+  return lines.line;
 }

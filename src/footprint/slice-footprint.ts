@@ -19,21 +19,36 @@ export interface Footprint {
   readonly centroidLon: number;
 }
 
+/** The shapes a footprint was measured from, for drawing: indices into the positions. */
+export interface FootprintShapes {
+  /** Hull vertices in RFC 7946 order, or undefined when there is no hull. */
+  readonly hullRing: Uint32Array | undefined;
+  /** Spanning-tree edges as index pairs [a0, b0, a1, b1, …]. */
+  readonly treeEdges: Uint32Array;
+}
+
 /** Footprint measures of distinct positions (latitude, longitude in degrees). */
 export function measureFootprint(latDeg: Float64Array, lonDeg: Float64Array): Footprint {
+  return measureFootprintWithShapes(latDeg, lonDeg).footprint;
+}
+
+/** measureFootprint, keeping the hull and tree it measured (so that views need not build them again). */
+export function measureFootprintWithShapes(latDeg: Float64Array, lonDeg: Float64Array): { footprint: Footprint; shapes: FootprintShapes } {
   const n = latDeg.length;
   const hull = convexHull(latDeg, lonDeg);
   const latitude = latitudeStats(latDeg);
   const centroid = sphericalCentroid(latDeg, lonDeg);
-  return {
+  const tree = n === 0 ? undefined : minimumSpanningTree(latDeg, lonDeg);
+  const footprint: Footprint = {
     positions: n,
     hullKm2: hull.kind === 'hull' ? polygonAreaKm2(latDeg, lonDeg, hull.ring) : NaN,
     hullNote: hull.kind === 'hull' || n === 0 ? undefined : hull.reason,
-    mstKm: n === 0 ? NaN : minimumSpanningTree(latDeg, lonDeg).lengthKm,
+    mstKm: tree === undefined ? NaN : tree.lengthKm,
     latMin: latitude.minDeg,
     latMax: latitude.maxDeg,
     latSpan: latitude.spanDeg,
     centroidLat: centroid.latDeg,
     centroidLon: centroid.lonDeg,
   };
+  return { footprint, shapes: { hullRing: hull.kind === 'hull' ? hull.ring : undefined, treeEdges: tree?.edges ?? new Uint32Array(0) } };
 }

@@ -11,6 +11,7 @@ export { isTrimmable, trimmedEnd, trimmedStart } from './text-span';
 export { StringDictionary, detach } from './string-dictionary';
 export { SNIFF_BYTES, sniffBytes } from './sniff-bytes';
 export { continuationPrefix, findInvalidUtf8, invalidUtf8Offset } from './utf8-check';
+export { InvalidUtf8Error, LineCounter, StrictTextDecoder } from './strict-text-decoder';
 export { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, matchSynonym, normaliseHeader } from './column-synonyms';
 export type { ColumnIndex, OccurrenceField, SynonymMatch } from './column-synonyms';
 export { mapColumns } from './column-mapping';

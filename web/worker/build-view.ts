@@ -10,7 +10,7 @@ import { latitudeHistogram } from '../../src/footprint/latitude-histogram';
 import type { EqualAreaGrid } from '../../src/grid';
 import { reconstructFeaturesAt, type PlateFeature } from '../../src/placement';
 import type { RotationModel } from '../../src/rotation';
-import { appendGreatCircleArc, convexHull, EARTH_RADIUS_KM, minimumSpanningTree } from '../../src/sphere';
+import { appendGreatCircleArc, EARTH_RADIUS_KM } from '../../src/sphere';
 import { chartScale, sliceOfAge, type TimeScale } from '../../src/time';
 import type { AnalysisView, CellEntries, CellShapes, FrameSettings, IndicatorPoints, PathSet, PointSet } from '../protocol';
 
@@ -62,8 +62,8 @@ export function buildView(inputs: ViewInputs): { view: AnalysisView; transfer: A
     positions: placesBySlice(result.places.lat, result.places.lon),
     cells,
     shapes,
-    hulls: hullPaths(result.places.lat, result.places.lon),
-    spanningTrees: treePaths(result.places.lat, result.places.lon),
+    hulls: hullPaths(result),
+    spanningTrees: treePaths(result),
     latitude: {
       ...latitude,
       ...(indicatorLatitude === undefined ? {} : { indicatorsPerSlice: indicatorLatitude.perSlice, indicatorsTotal: indicatorLatitude.total }),
@@ -171,28 +171,23 @@ class PathCollector {
   }
 }
 
-function hullPaths(lat: readonly Float64Array[], lon: readonly Float64Array[]): PathSet {
+/** The hulls the analysis measured, as closed great-circle paths. */
+function hullPaths({ places: { lat, lon }, shapes }: AnalysisResult): PathSet {
   const paths = new PathCollector();
   for (let s = 0; s < lat.length; s++) {
-    const hull = convexHull(lat[s], lon[s]);
-    if (hull.kind === 'hull') paths.addPath(lat[s], lon[s], hull.ring, true);
+    const ring = shapes[s].hullRing;
+    if (ring !== undefined) paths.addPath(lat[s], lon[s], ring, true);
     paths.endSlice();
   }
   return paths.finish();
 }
 
-function treePaths(lat: readonly Float64Array[], lon: readonly Float64Array[]): PathSet {
+/** The spanning trees the analysis measured, one path per edge. */
+function treePaths({ places: { lat, lon }, shapes }: AnalysisResult): PathSet {
   const paths = new PathCollector();
-  const edge = new Uint32Array(2);
   for (let s = 0; s < lat.length; s++) {
-    if (lat[s].length >= 2) {
-      const { edges } = minimumSpanningTree(lat[s], lon[s]);
-      for (let k = 0; k < edges.length; k += 2) {
-        edge[0] = edges[k];
-        edge[1] = edges[k + 1];
-        paths.addPath(lat[s], lon[s], edge, false);
-      }
-    }
+    const edges = shapes[s].treeEdges;
+    for (let k = 0; k < edges.length; k += 2) paths.addPath(lat[s], lon[s], edges.subarray(k, k + 2), false);
     paths.endSlice();
   }
   return paths.finish();
