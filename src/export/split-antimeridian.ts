@@ -24,22 +24,27 @@ export function splitAtAntimeridian(ring: Ring): Ring[] {
 
 /**
  * Sutherland–Hodgman clipping of a closed ring against the half-plane side·(lon − edge) ≥ 0
- * (side -1 keeps the west, +1 the east); the result is closed again.
+ * (side -1 keeps the west, +1 the east); the result is closed again. A vertex on the cut is
+ * kept on both sides and is itself where its edges meet the cut: a crossing is put in only
+ * where an edge passes strictly from one side to the other, so no position is repeated. A side
+ * with no vertex off the cut has no area and gives no part (an empty ring).
  */
 function clipAtLongitude(ring: Ring, edge: number, side: 1 | -1): Ring {
   const out: Ring = [];
-  const inside = (lon: number) => side * (lon - edge) >= 0;
+  let offCut = false;
   for (let i = 0; i + 1 < ring.length; i++) {
     const [lon0, lat0] = ring[i];
     const [lon1, lat1] = ring[i + 1];
-    const in0 = inside(lon0);
-    const in1 = inside(lon1);
-    if (in0) out.push([lon0, lat0]);
-    if (in0 !== in1) {
+    const d0 = side * (lon0 - edge);
+    const d1 = side * (lon1 - edge);
+    if (d0 >= 0) out.push([lon0, lat0]);
+    if (d0 > 0) offCut = true;
+    if (d0 * d1 < 0) {
       const t = (edge - lon0) / (lon1 - lon0);
       out.push([edge, lat0 + t * (lat1 - lat0)]);
     }
   }
-  if (out.length > 0) out.push([out[0][0], out[0][1]]);
+  if (!offCut) return [];
+  out.push([out[0][0], out[0][1]]);
   return out;
 }

@@ -16,15 +16,29 @@
  *   side: the ring is closed along that pole line (north when an exterior runs eastward or a
  *   hole westward, south otherwise), so that planar readers fill the right side and great-circle
  *   readers see only meridians and zero-length edges on the pole.
+ * No two consecutive positions are written alike (a reader on the sphere, such as s2, refuses a
+ * ring with a repeated vertex), at the precision positions are written to, SAME_PLACE_DEG:
+ * a point that close to the one before it (a repeated input vertex, the two ends of an input's
+ * pole line carried off the pole) is left out; a point that close to a pole is on it; a point
+ * that close to the antimeridian is put on it, so no crossing is put in beside it.
  */
-import { DEGREES } from '../sphere/earth';
+import { DEGREES, RADIANS } from '../sphere/earth';
 
 export type LonLat = [number, number];
 
-/** A point closer to a pole than this (radians, about 6 mm on the Earth) is on the pole. */
-const POLE_DISTANCE = 1e-9;
+/** Degrees: one unit of the last decimal written for a position (DECIMALS.degrees = 6), so
+ * positions kept at least this far apart in longitude or latitude are written apart. */
+const SAME_PLACE_DEG = 1e-6;
+/** A point closer to a pole than this (radians, SAME_PLACE_DEG of latitude) is on the pole. */
+const POLE_DISTANCE = SAME_PLACE_DEG * RADIANS;
 /** Longitude changes within this of ±180° (degrees) are edges over a pole; see above. */
 const AMBIGUOUS_DEG = 1e-4;
+
+/** `lon` put on the nearest odd multiple of 180° when it is within SAME_PLACE_DEG of it. */
+function snappedToCut(lon: number): number {
+  const cut = 360 * Math.round((lon - 180) / 360) + 180;
+  return Math.abs(lon - cut) < SAME_PLACE_DEG ? cut : lon;
+}
 
 function mod360(x: number): number {
   return ((x % 360) + 360) % 360;
@@ -64,7 +78,7 @@ export function unwrapRing(xyz: Float64Array, exterior: boolean): { ring: LonLat
   let first = 0;
   while (first < n && poleOf(first) !== 0) first++;
   if (first === n) throw new RangeError('A ring with every point on a pole has no area.');
-  const ring: LonLat[] = [[lonOf(first), latOf(first)]];
+  const ring: LonLat[] = [[snappedToCut(lonOf(first)), latOf(first)]];
   let lon = ring[0][0], pendingPole = 0, prev = first;
   for (let step = 1; step <= n; step++) {
     const i = (first + step) % n;
@@ -73,21 +87,29 @@ export function unwrapRing(xyz: Float64Array, exterior: boolean): { ring: LonLat
       pendingPole = pole;
       continue;
     }
-    const raw = lonOf(i);
+    const raw = lonOf(i), lat = latOf(i);
     let delta = raw - lon - 360 * Math.round((raw - lon) / 360);
     if (pendingPole === 0 && Math.abs(delta) > 180 - AMBIGUOUS_DEG) pendingPole = Math.sign(xyz[3 * prev + 2] + xyz[3 * i + 2]);
     if (pendingPole !== 0) {
       delta = overPole(pendingPole, lon, raw);
-      ring.push([lon, 90 * pendingPole], [lon + delta, 90 * pendingPole]);
+      ring.push([lon, 90 * pendingPole]);
+      if (Math.abs(delta) >= SAME_PLACE_DEG) ring.push([lon + delta, 90 * pendingPole]);
       pendingPole = 0;
     }
     else {
-      const low = Math.min(lon, lon + delta), high = Math.max(lon, lon + delta);
+      const next = snappedToCut(lon + delta);
+      if (Math.abs(next - lon) < SAME_PLACE_DEG && Math.abs(lat - ring[ring.length - 1][1]) < SAME_PLACE_DEG) {
+        // The same written place as the point before: keep one, the ring's own first point at the close.
+        if (step < n) continue;
+        if (ring.length > 1) ring.pop();
+      }
+      const low = Math.min(lon, next), high = Math.max(lon, next);
       const cut = 360 * Math.floor((high - 180) / 360) + 180; // the last odd multiple of 180° not above `high`
       if (cut > low && cut < high) ring.push([cut, crossingLat(xyz, prev, i)]);
+      delta = next - lon;
     }
     lon += delta;
-    ring.push([lon, latOf(i)]);
+    ring.push([lon, lat]);
     prev = i;
   }
   const winding = Math.round((lon - ring[0][0]) / 360);
