@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { geoArea } from 'd3-geo';
-import { booleanClockwise, polygon } from '@turf/turf';
+import { booleanClockwise, booleanValid, polygon } from '@turf/turf';
 import { splitAtAntimeridian, type Ring } from '../../src/export/split-antimeridian';
 
 /** d3-geo reads rings clockwise (STACK.md): reverse our counter-clockwise ones before measuring. */
@@ -40,5 +40,23 @@ describe('splitAtAntimeridian', () => {
     const total = parts.reduce((sum, part) => sum + d3Area(part), 0);
     // Vertices added on the cut make tiny lon/lat-vs-great-circle differences: relative 1e-4 is ample.
     expect(total / d3Area(ring)).toBeCloseTo(1, 4);
+  });
+
+  // s2 (as R's sf uses it) refuses a ring with a repeated vertex ("Edge 0 is degenerate");
+  // turf's booleanValid refuses it too.
+  it('puts no crossing beside a vertex already on the cut, so no position repeats', () => {
+    const diamond: Ring = [[175, 0], [180, -5], [185, 0], [180, 5], [175, 0]];
+    const parts = splitAtAntimeridian(diamond);
+    expect(parts).toEqual([
+      [[175, 0], [180, -5], [180, 5], [175, 0]],
+      [[-180, -5], [-175, 0], [-180, 5], [-180, -5]],
+    ]);
+    for (const part of parts) expect(booleanValid(polygon([part]))).toBe(true);
+    expect((d3Area(parts[0]) + d3Area(parts[1])) / d3Area(diamond)).toBeCloseTo(1, 12);
+  });
+
+  it('gives no part for a side the ring only touches along the cut', () => {
+    const touching: Ring = [[180, 0], [190, 0], [190, 5], [180, 5], [180, 0]];
+    expect(splitAtAntimeridian(touching)).toEqual([[[-180, 0], [-170, 0], [-170, 5], [-180, 5], [-180, 0]]]);
   });
 });
