@@ -4,13 +4,11 @@
 // words it shows are tested with web/text (text-wording.test.ts).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { countScale } from '../../web/colour/measure-scale';
 import { FIT_SHARE, fitZoom, GLOBE_RADIUS_PX_AT_ZOOM_0 } from '../../web/map/globe-camera';
 import { graticule, offlineStyle } from '../../web/map/offline-style';
 import { POINT_ZOOM, pointDecision, pointNotice } from '../../web/map/point-budget';
 import { SliceCache } from '../../web/map/slice-cache';
 import { POINT_BUDGET } from '../../web/state/view-options';
-import { fixtureView } from './globe-fixture';
 
 describe('pointDecision', () => {
   it('draws up to the budget and leaves out one place more', () => {
