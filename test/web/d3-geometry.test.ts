@@ -11,7 +11,7 @@ import { geoArea } from 'd3-geo';
 import type { FeatureCollection, Polygon, Position } from 'geojson';
 import { describe, expect, it } from 'vitest';
 import { HealpixGrid } from '../../src/grid';
-import { cellPolygon, polygonEdges, rewindForD3, slicePaths } from '../../web/figure/d3-geometry';
+import { cellPolygon, polygonEdges, rewindForD3, slicePaths } from '../../web/equal-area/d3-geometry';
 import type { CellShapes } from '../../web/protocol';
 import { boxRing, capRing, CAP_EDGE_LAT, smallView } from './small-analysis-view';
 

@@ -37,7 +37,7 @@ describe('dg-equal-area-view', () => {
     const s = element.view!.slices[2];
     expect(canvas.getAttribute('role')).toBe('img');
     const label = canvas.getAttribute('aria-label')!;
-    for (const part of ['south polar equal-area', 'Slice three, 90–80 Ma', `${s.cells} occupied cells`, MEASURE_UNITS.taxa, `${s.positions} places`]) {
+    for (const part of ['south polar equal-area', 'Slice three, 90–80 Ma', `${s.cells} occupied cells`, MEASURE_UNITS.taxa, `${s.positions} distinct places`]) {
       expect(label).toContain(part);
     }
     expect(element.shadowRoot!.textContent).toContain('southern hemisphere only');

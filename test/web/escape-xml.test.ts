@@ -3,7 +3,7 @@
 // lists the five predefined entities, §2.2 the characters a document may hold at all.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { escapeXml } from '../../web/figure/escape-xml';
+import { escapeXml } from '../../web/equal-area/escape-xml';
 
 /** Reverses the five predefined entities (XML 1.0 §4.6), the reading an XML parser does. */
 function unescapeXml(text: string): string {

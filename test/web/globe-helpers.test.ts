@@ -1,17 +1,14 @@
 // Small decisions of the WebGL map: the point budget (the rule written in STACK.md / brief:
 // draw places when ≤ POINT_BUDGET, when asked, or from zoom POINT_ZOOM), the slice cache, the
-// offline style (nothing that makes maplibre request anything: no tiles, glyphs or sprites) and
-// the words it shows. Legend tick positions are checked with the identity log(10ᵏ)/log(10ⁿ) = k/n.
+// offline style (nothing that makes maplibre request anything: no tiles, glyphs or sprites). The
+// words it shows are tested with web/text (text-wording.test.ts).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { countScale } from '../../web/colour/measure-scale';
 import { FIT_SHARE, fitZoom, GLOBE_RADIUS_PX_AT_ZOOM_0 } from '../../web/map/globe-camera';
-import { cellTooltipLines, legendTicks, mapRegionLabel } from '../../web/map/map-labels';
 import { graticule, offlineStyle } from '../../web/map/offline-style';
 import { POINT_ZOOM, pointDecision, pointNotice } from '../../web/map/point-budget';
 import { SliceCache } from '../../web/map/slice-cache';
 import { POINT_BUDGET } from '../../web/state/view-options';
-import { fixtureView } from './globe-fixture';
 
 describe('pointDecision', () => {
   it('draws up to the budget and leaves out one place more', () => {
@@ -94,27 +91,6 @@ describe('offlineStyle', () => {
     expect(meridians.every((c) => c[0][1] === -90 && c[c.length - 1][1] === 90 && c.length === 91)).toBe(true);
     expect(parallels.map((c) => c[0][1])).toEqual([-60, -30, 0, 30, 60]);
     expect(parallels.every((c) => c[0][0] === -180 && c[c.length - 1][0] === 180)).toBe(true);
-  });
-});
-
-describe('map words', () => {
-  const view = fixtureView();
-
-  it('lists a cell’s three counts with singular and plural', () => {
-    expect(cellTooltipLines(view, 0)).toEqual(['1 occurrence', '1 collection', '1 taxon']);
-    expect(cellTooltipLines(view, 2)).toEqual(['120 occurrences', '3 collections', '7 taxa']);
-    expect(cellTooltipLines({ ...view, collectionsArePositions: true }, 1)[1]).toBe('2 distinct places');
-  });
-
-  it('names the region by projection, slice, cell count and unit', () => {
-    expect(mapRegionLabel(view, 1, 'taxa', 'globe')).toBe('Globe of slice B (10–5 Ma): 2 occupied cells coloured by distinct taxa per cell');
-    expect(mapRegionLabel(undefined, 0, 'taxa', 'flat')).toBe('Flat map (Web Mercator): no analysis to show');
-  });
-
-  it('places legend ticks 1, 10, 100, 1000 at 0, ⅓, ⅔ and all of a log scale up to 1000', () => {
-    const ticks = legendTicks(countScale(1000));
-    expect(ticks.map((t) => t.label)).toEqual(['1', '10', '100', '1,000']);
-    ticks.forEach((t, k) => expect(t.percent).toBeCloseTo((100 * k) / 3, 9));
   });
 });
 

@@ -6,10 +6,10 @@ import fc from 'fast-check';
 import type { Polygon } from 'geojson';
 import { describe, expect, it } from 'vitest';
 import { HealpixGrid } from '../../src/grid';
-import { CellLookup } from '../../web/figure/cell-lookup';
-import { fitFrame, frameForwardInto } from '../../web/figure/map-frame';
-import { entryAtMapPoint, mapPointToLonLatInto } from '../../web/figure/map-hit';
-import { EQUAL_AREA_PROJECTIONS, referenceProjection } from '../../web/figure/map-projection';
+import { CellLookup } from '../../web/equal-area/cell-lookup';
+import { fitFrame, frameForwardInto } from '../../web/equal-area/map-frame';
+import { entryAtMapPoint, mapPointToLonLatInto } from '../../web/equal-area/map-hit';
+import { EQUAL_AREA_PROJECTIONS, referenceProjection } from '../../web/equal-area/map-projection';
 import { d3Polygon } from '../grid/d3-rings';
 import { smallView } from './small-analysis-view';
 

@@ -3,7 +3,7 @@
 import { interpolateViridis } from 'd3-scale-chromatic';
 import { describe, expect, it } from 'vitest';
 import { countScale } from '../../web/colour/measure-scale';
-import { legendStops, mapLegend } from '../../web/figure/map-legend';
+import { legendStops, mapLegend } from '../../web/equal-area/map-legend';
 import { MEASURE_UNITS, measureMax } from '../../web/state/view-options';
 import { INDICATOR_KINDS, smallView } from './small-analysis-view';
 
@@ -29,7 +29,7 @@ describe('mapLegend', () => {
       expect(legend.ticks.map((t) => t.value)).toEqual(countScale(max).ticks);
       expect(legend.ticks.at(-1)!.value).toBe(max);
       for (const tick of legend.ticks) expect(tick.position).toBeCloseTo(tick.value <= 1 ? 0 : Math.log(tick.value) / Math.log(max), 12);
-      expect(legend.unit).toBe(MEASURE_UNITS[measure]);
+      expect(legend.title).toContain(MEASURE_UNITS[measure]);
       // The colour at the top of the ramp is the colour of the fullest cell.
       expect(legendStops()[8].colour).toBe(legend.scale.css(max));
     }

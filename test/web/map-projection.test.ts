@@ -8,8 +8,8 @@
 import { geoPath } from 'd3-geo';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fitFrame, frameForwardInto, frameInverseInto } from '../../web/figure/map-frame';
-import { EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, PROJECTION_CAPTIONS, fittedProjection, isOnMap, referenceProjection } from '../../web/figure/map-projection';
+import { fitFrame, frameForwardInto, frameInverseInto } from '../../web/equal-area/map-frame';
+import { EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, PROJECTION_CAPTIONS, fittedProjection, isOnMap, referenceProjection } from '../../web/equal-area/map-projection';
 import { HealpixGrid } from '../../src/grid';
 import { boxRing } from './small-analysis-view';
 

@@ -9,10 +9,10 @@
 import { describe, expect, it } from 'vitest';
 import { HealpixGrid } from '../../src/grid';
 import { countScale } from '../../web/colour/measure-scale';
-import { figureLayout } from '../../web/figure/figure-layout';
-import { fittedProjection, type EqualAreaProjection } from '../../web/figure/map-projection';
-import { mapSvg } from '../../web/figure/map-svg';
-import { ViewGeometry } from '../../web/figure/view-geometry';
+import { figureLayout } from '../../web/equal-area/figure-layout';
+import { fittedProjection, type EqualAreaProjection } from '../../web/equal-area/map-projection';
+import { mapSvg } from '../../web/equal-area/map-svg';
+import { ViewGeometry } from '../../web/equal-area/view-geometry';
 import type { AnalysisView, Measure } from '../../web/protocol';
 import { DEFAULT_LAYERS, MEASURE_UNITS, measureMax, type LayerVisibility } from '../../web/state/view-options';
 import { DEFAULT_SLICES, smallView } from './small-analysis-view';
@@ -87,7 +87,7 @@ describe('mapSvg', () => {
     expect(doc.querySelectorAll('linearGradient stop').length).toBe(9);
     expect(doc.querySelector('#legend rect')!.getAttribute('fill')).toBe('url(#count-ramp)');
     const labels = [...doc.querySelectorAll('#legend text')].map((t) => t.textContent);
-    expect(labels).toContain(`Occupied cells: ${MEASURE_UNITS.taxa}`);
+    expect(labels).toContain(`Occupied cells: ${MEASURE_UNITS.taxa} (log scale)`);
     for (const tick of countScale(measureMax(view, 'taxa')).ticks) expect(labels).toContain(String(tick));
     for (const kind of ['coal', 'evaporite', 'reef']) expect(labels).toContain(kind);
     expect(text).toContain('Equal Earth projection');

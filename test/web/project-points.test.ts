@@ -3,8 +3,8 @@
 import { geoDistance } from 'd3-geo';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, fittedProjection } from '../../web/figure/map-projection';
-import { projectPointsInto } from '../../web/figure/project-points';
+import { EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, fittedProjection } from '../../web/equal-area/map-projection';
+import { projectPointsInto } from '../../web/equal-area/project-points';
 
 const CLIP = (POLAR_CLIP_DEG * Math.PI) / 180;
 const CENTRE = { 'equal-earth': undefined, 'polar-north': [0, 90], 'polar-south': [0, -90] } as const;

@@ -1,19 +1,9 @@
 /** Words for the curves panel: the hover readout, each slice's accessible name, the chart summary. */
 import type { SliceMetrics } from '../../src/analysis';
 import { formatMa } from '../../src/time';
+import { sliceTitle } from '../text';
 import { formatNumber } from './number-format';
 import { seriesLabel, seriesValues, type SeriesSpec } from './series';
-
-/** "298.9–293.5 Ma". */
-export function ageRange(slice: Pick<SliceMetrics, 'baseMa' | 'topMa'>): string {
-  return `${formatMa(slice.baseMa)}–${formatMa(slice.topMa)} Ma`;
-}
-
-/** "Asselian, 298.9–293.5 Ma"; just the range when the slice is named by it (equal bins: "5–0 Ma"). */
-export function sliceTitle(slice: Pick<SliceMetrics, 'name' | 'baseMa' | 'topMa'>): string {
-  const range = ageRange(slice);
-  return slice.name === range ? range : `${slice.name}, ${range}`;
-}
 
 /** A value with its unit: "1,234", "12,345 km²", "45.2°"; "none" when there is no value, with the slice's hull note if it has one. */
 export function seriesValueText(spec: SeriesSpec, slice: SliceMetrics): string {

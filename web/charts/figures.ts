@@ -1,7 +1,8 @@
 /** The panels' exported figures: standalone SVG documents with a title block, from the same layouts as the screen. */
 import type { AnalysisView } from '../protocol';
+import { sliceTitle } from '../text';
 import { curvesLayout } from './curves-layout';
-import { curvesDescription, sliceTitle } from './curves-text';
+import { curvesDescription } from './curves-text';
 import { latitudeLayout } from './latitude-layout';
 import { latitudeDescription } from './latitude-text';
 import { clampSlice, viewIndicatorKinds } from './view-helpers';

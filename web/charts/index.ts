@@ -8,7 +8,7 @@ export { CHART_FONT, escapeXml, markToSvg, svgDocument, type SvgDocumentParts } 
 export { renderMark, renderMarks } from './lit-marks';
 export { sliceEdges, timeAxisMarks, timeScale } from './time-axis';
 export { curvesLayout, type CurvesInput, type CurvesLayout } from './curves-layout';
-export { ageRange, curvesDescription, curvesReadout, seriesValueText, sliceTitle } from './curves-text';
+export { curvesDescription, curvesReadout, seriesValueText } from './curves-text';
 export { memoLast } from './memo-last';
 export { svgToPngBlob } from './svg-to-png';
 export { bandEdges, bandLabel, bandShares, indicatorBandCounts, largestCount, peakBand, sliceBandShares, totalBandShares, type BandShares } from './band-shares';
@@ -17,4 +17,3 @@ export { SLICE_BAR, TOTAL_BAR, latitudeLayout, type LatitudeInput, type Latitude
 export { headingMarks, type FigureHeading } from './figure-heading';
 export { CURVES_TITLE, LATITUDE_TITLE, curvesFigure, latitudeFigure, type Figure } from './figures';
 export { clampSlice, dataIndex, viewIndicatorKinds } from './view-helpers';
-export { SizeController } from './size-controller';

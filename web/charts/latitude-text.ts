@@ -1,6 +1,7 @@
 /** Words for the latitude panel: a band's readout (and accessible name) and the chart summary. */
 import type { LatitudeCounts } from '../protocol';
 import { bandLabel, indicatorBandCounts, peakBand, sliceBandShares, totalBandShares } from './band-shares';
+import { countWords } from '../text';
 import { formatNumber, formatPercent } from './number-format';
 
 /** Names of the indicator kinds, when the view has per-slice indicator counts. */
@@ -29,7 +30,7 @@ export function latitudeDescription(latitude: LatitudeCounts, slice: number, sli
     const b = peakBand(shares);
     return b < 0 ? 'none' : `${bandLabel(latitude.bandDeg, b)} (${formatPercent(shares[b])})`;
   };
-  let text = `Share of occurrences per ${latitude.bandDeg}° palaeolatitude band, north at the top: ${sliceName} (${formatNumber(own.total)} occurrences) against all slices (${formatNumber(all.total)}). Largest share: ${sliceName} ${peak(own.shares)}, all slices ${peak(all.shares)}.`;
+  let text = `Share of occurrences per ${latitude.bandDeg}° palaeolatitude band, north at the top: ${sliceName} (${countWords(own.total, 'occurrence')}) against all slices (${formatNumber(all.total)}). Largest share: ${sliceName} ${peak(own.shares)}, all slices ${peak(all.shares)}.`;
   if (kinds.length > 0) {
     const totals = kinds.map((kind, k) => `${kind} ${formatNumber(indicatorBandCounts(latitude, kinds.length, slice, k).reduce((a, c) => a + c, 0))}`);
     text += ` Indicator sites in ${sliceName}: ${totals.join(', ')}.`;

@@ -1,5 +1,5 @@
 /** A standalone SVG document from marks, with every piece of text escaped. */
-import { escapeXml } from '../figure/escape-xml';
+import { escapeXml } from '../equal-area/escape-xml';
 import type { Mark } from './marks';
 
 /** Font for every chart, on screen and in files (no web fonts: the page fetches nothing). */

@@ -2,6 +2,7 @@
 import { LitElement, css, html, nothing } from 'lit';
 import type { AnalysisView } from '../protocol';
 import type { CellFocus } from '../state/app-state';
+import { cellCentre, cellCounts, countWords } from '../text';
 import { panelStyles } from './shared-styles';
 
 /** Taxa listed before "and N more". */
@@ -39,7 +40,7 @@ export class DgCellDetails extends LitElement {
       this.dispatchEvent(new CustomEvent('cell-hover', { detail, bubbles: true, composed: true }));
     }}>
       <option value="-1" ?selected=${chosen < 0}>choose (most occurrences first)</option>
-      ${entries.map((k) => html`<option value=${k} ?selected=${k === chosen}>${view.cells.cell[k]}: ${view.cells.occurrences[k]} occurrences</option>`)}
+      ${entries.map((k) => html`<option value=${k} ?selected=${k === chosen}>${view.cells.cell[k]}: ${countWords(view.cells.occurrences[k], 'occurrence')}</option>`)}
     </select></label>`;
   }
 
@@ -57,8 +58,8 @@ export class DgCellDetails extends LitElement {
     const lon = view.shapes.centre[2 * shape], lat = view.shapes.centre[2 * shape + 1];
     const taxa = focus.taxa;
     return html`
-      <h2>Cell ${view.cells.cell[k]} <span class="hint">(${view.gridName}, centre ${lat.toFixed(1)}°, ${lon.toFixed(1)}°)</span></h2>
-      <p data-field="cell-counts">${view.cells.occurrences[k]} occurrences · ${view.cells.collections[k]} ${view.collectionsArePositions ? 'places' : 'collections'} · ${view.cells.taxa[k]} taxa</p>
+      <h2>Cell ${view.cells.cell[k]} <span class="hint">(${view.gridName}, ${cellCentre(lat, lon)})</span></h2>
+      <p data-field="cell-counts">${cellCounts(view, k).join(' · ')}</p>
       ${taxa === undefined ? html`<p class="hint">Listing taxa…</p>` : html`
         <ul aria-label="Taxa in this cell">${taxa.slice(0, LISTED_TAXA).map((t) => html`<li>${t}</li>`)}</ul>
         ${taxa.length > LISTED_TAXA ? html`<p class="hint">and ${taxa.length - LISTED_TAXA} more</p>` : nothing}`}`;

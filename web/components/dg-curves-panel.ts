@@ -4,15 +4,16 @@
  * series with its own axis, or all series divided by their maxima on one axis. Geometry is
  * computed once per (view, series, normalise, size); a slice change only moves the highlight.
  */
-import { LitElement, css, html, svg, unsafeCSS, type PropertyValues } from 'lit';
+import { LitElement, css, html, svg, unsafeCSS } from 'lit';
 import { guard } from 'lit/directives/guard.js';
 import type { AnalysisView } from '../protocol';
 import type { SliceRange } from '../state/slice-range';
 import { rgbCss } from '../colour/layer-colours';
 import {
-  CHART_FONT, HIGHLIGHT, SERIES, SERIES_KEYS, SizeController, clampSlice, curvesDescription, curvesFigure, curvesLayout, curvesReadout,
+  CHART_FONT, HIGHLIGHT, SERIES, SERIES_KEYS, clampSlice, curvesDescription, curvesFigure, curvesLayout, curvesReadout,
   dataIndex, memoLast, renderMarks, seriesLabel, svgToPngBlob, visibleSeries, type CurvesLayout,
 } from '../charts';
+import { RovingFocusController, SizeController } from '../controllers';
 
 export class DgCurvesPanel extends LitElement {
   static override properties = {
@@ -22,7 +23,6 @@ export class DgCurvesPanel extends LitElement {
     series: { attribute: false },
     range: { attribute: false },
     pointed: { state: true },
-    focused: { state: true },
   };
 
   declare view: AnalysisView | undefined;
@@ -34,11 +34,20 @@ export class DgCurvesPanel extends LitElement {
   declare range: SliceRange | undefined;
   /** Slice under the pointer. */
   declare private pointed: number | undefined;
-  /** Slice whose mark has keyboard focus. */
-  declare private focused: number | undefined;
-  private moveFocus = false;
   /** The scrolling chart area: its size comes from the host, never from the chart inside it (flex-basis 0, overflow auto), so fitting rows to it cannot loop. */
-  private readonly size = new SizeController(this, () => this.renderRoot.querySelector('.scroller'), 640, 240);
+  private readonly size = new SizeController(this, () => this.renderRoot.querySelector('.scroller'), { width: 640, height: 240 });
+  /** Arrows and Home/End move the focus between the charted slices (older to the left); Enter or Space selects. */
+  private readonly roving = new RovingFocusController(this, {
+    container: () => this.renderRoot.querySelector('.hits'),
+    attribute: 'data-slice',
+    range: () => {
+      if (this.view === undefined || this.view.slices.length === 0) return undefined;
+      const { from, to } = this.bounds(this.view);
+      return [from, to];
+    },
+    keys: { ArrowLeft: -1, ArrowRight: 1, Home: 'low', End: 'high' },
+    onActivate: (slice) => this.select(slice),
+  });
 
   private readonly layoutOf = memoLast((view: AnalysisView, seriesKey: string, normalise: boolean, width: number, height: number, from: number, to: number): CurvesLayout =>
     curvesLayout({ slices: view.slices.slice(from, to + 1), collectionsArePositions: view.collectionsArePositions, series: visibleSeries(seriesKey.split(',')), normalise, width, height }),
@@ -61,7 +70,6 @@ export class DgCurvesPanel extends LitElement {
     this.series = SERIES_KEYS;
     this.range = undefined;
     this.pointed = undefined;
-    this.focused = undefined;
   }
 
   static override styles = css`
@@ -101,14 +109,7 @@ export class DgCurvesPanel extends LitElement {
     const text = ready ? this.textOf(view, this.seriesKey(), this.normalise) : undefined;
     return html`${this.renderControls(view)}
       <div class="scroller">${ready && text !== undefined ? this.renderChart(view, text) : html`<p class="empty">No time slices to chart yet.</p>`}</div>
-      <p class="readout">${ready && text !== undefined ? text.readouts[this.pointed ?? this.focused ?? clampSlice(view, this.slice)] : ''}</p>`;
-  }
-
-  protected override updated(changed: PropertyValues): void {
-    if (changed.has('focused') && this.moveFocus && this.focused !== undefined) {
-      this.moveFocus = false;
-      this.renderRoot.querySelector<SVGRectElement>(`.hits rect[data-slice="${this.focused}"]`)?.focus();
-    }
+      <p class="readout">${ready && text !== undefined ? text.readouts[this.pointed ?? this.roving.focused ?? clampSlice(view, this.slice)] : ''}</p>`;
   }
 
   private renderControls(view: AnalysisView | undefined) {
@@ -132,7 +133,6 @@ export class DgCurvesPanel extends LitElement {
     const layout = this.layoutOf(view, this.seriesKey(), this.normalise, this.size.width, this.size.height, from, to);
     const current = clampSlice(view, this.slice);
     const shown = current - from; // the highlight's column, when the current slice is charted
-    const tabStop = this.focused ?? current;
     const { width, height, plotTop, plotBottom, sliceLeft, sliceRight } = layout;
     const label = `${text.description} Current slice: ${view.slices[current].name}.`;
     return html`<div class="chart" style="width:${width}px;height:${plotBottom}px">
@@ -141,12 +141,12 @@ export class DgCurvesPanel extends LitElement {
           ${guard([layout], () => renderMarks(layout.marks))}
         </svg>
         <svg class="hits" role="listbox" aria-label="Time slices (arrow keys move, Enter selects)" aria-orientation="horizontal"
-          width=${width} height=${plotBottom} @click=${this.onHitClick} @keydown=${this.onHitKey} @pointerover=${this.onHitPointer}
-          @pointerleave=${this.onHitLeave} @focusin=${this.onHitFocus} @focusout=${this.onHitBlur}>
+          width=${width} height=${plotBottom} @click=${this.onHitClick} @keydown=${this.roving.onKeyDown} @pointerover=${this.onHitPointer}
+          @pointerleave=${this.onHitLeave} @focusin=${this.roving.onFocusIn} @focusout=${this.roving.onFocusOut}>
           ${Array.from(sliceLeft, (left, k) => {
             const s = from + k;
             return svg`<rect role="option" data-slice=${s} x=${left} y=${plotTop} width=${Math.max(1, sliceRight[k] - left)}
-            height=${plotBottom - plotTop} tabindex=${s === tabStop ? 0 : -1} aria-selected=${s === current ? 'true' : 'false'} aria-label=${text.readouts[s]}></rect>`;
+            height=${plotBottom - plotTop} tabindex=${this.roving.tabIndex(s, current)} aria-selected=${s === current ? 'true' : 'false'} aria-label=${text.readouts[s]}></rect>`;
           })}
         </svg>
       </div>
@@ -175,40 +175,12 @@ export class DgCurvesPanel extends LitElement {
     if (slice !== undefined) this.select(slice);
   };
 
-  /** Arrows and Home/End move the focus between slices (older to the left); Enter or Space selects. */
-  private readonly onHitKey = (event: KeyboardEvent): void => {
-    const at = dataIndex(event, 'data-slice');
-    if (at === undefined || this.view === undefined || this.view.slices.length === 0) return;
-    const { from, to } = this.bounds(this.view);
-    const next = event.key === 'ArrowLeft' ? at - 1 : event.key === 'ArrowRight' ? at + 1 : event.key === 'Home' ? from : event.key === 'End' ? to : undefined;
-    if (next !== undefined) {
-      this.moveFocus = true;
-      this.focused = Math.min(to, Math.max(from, next));
-    } else if (event.key === 'Enter' || event.key === ' ') {
-      this.select(at);
-    } else {
-      return;
-    }
-    // Handled here: the app's own arrow keys (which step the current slice) must not act as well.
-    event.preventDefault();
-    event.stopPropagation();
-  };
-
   private readonly onHitPointer = (event: PointerEvent): void => {
     this.pointed = dataIndex(event, 'data-slice');
   };
 
   private readonly onHitLeave = (): void => {
     this.pointed = undefined;
-  };
-
-  private readonly onHitFocus = (event: FocusEvent): void => {
-    this.focused = dataIndex(event, 'data-slice');
-  };
-
-  private readonly onHitBlur = (event: FocusEvent): void => {
-    const next = event.relatedTarget;
-    if (!(next instanceof Element && next.closest('.hits') !== null)) this.focused = undefined;
   };
 
   private readonly onSeriesChange = (): void => {

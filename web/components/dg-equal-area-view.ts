@@ -1,19 +1,21 @@
 /**
  * The equal-area map of one slice, drawn with d3-geo on a canvas: the WebGL-free fallback and
  * the source of the map figures (toSvg, toPngBlob). Projected geometry is kept per
- * (view, projection) in reference pixels (web/figure/projected-view.ts) and prepared in idle
+ * (view, projection) in reference pixels (web/equal-area/projected-view.ts) and prepared in idle
  * time, so a slice change only draws; a resize only changes the frame.
  */
 import { SliceMapElement } from './slice-map-element';
 import { css, html, nothing, type PropertyValues } from 'lit';
 import { styleMap } from 'lit/directives/style-map.js';
 import { scaleGradientCss } from '../colour/measure-scale';
+import { IdleWorkController, SizeController } from '../controllers';
 import {
-  CellLookup, DotRaster, FIGURE_PAD, IdleWork, PROJECTION_CAPTIONS, ProjectedView, ViewGeometry, cellSummary, drawMap, entryAtMapPoint,
-  figureLayout, figurePng, fitFrame, hasSlice, mapDescription, mapLegend, mapSvg, referenceProjection, sliceTitle,
+  CellLookup, DotRaster, FIGURE_PAD, PROJECTION_CAPTIONS, PROJECTION_NAMES, ProjectedView, ViewGeometry, drawMap, entryAtMapPoint,
+  figureLayout, figurePng, fitFrame, hasSlice, mapLegend, mapSvg, referenceProjection,
   type EqualAreaProjection, type MapFrame, type MapLegend, type MapPicture,
-} from '../figure';
+} from '../equal-area';
 import type { AnalysisView, Measure } from '../protocol';
+import { cellTipLines, mapDescription, sliceTitle } from '../text';
 
 /** Figure width when the map has not been laid out, and the least one, CSS px. */
 const FIGURE_WIDTH: Readonly<Record<EqualAreaProjection, number>> = { 'equal-earth': 960, 'polar-north': 720, 'polar-south': 720 };
@@ -23,7 +25,7 @@ const MAP_PAD = 6;
 /** The PNG figure's pixels per CSS pixel. */
 const PNG_RATIO = 2;
 
-interface Tip { readonly x: number; readonly y: number; readonly text: string }
+interface Tip { readonly x: number; readonly y: number; readonly lines: readonly string[] }
 
 export class DgEqualAreaView extends SliceMapElement {
   static override properties = {
@@ -40,10 +42,10 @@ export class DgEqualAreaView extends SliceMapElement {
   #lookup: CellLookup | undefined;
   #projected = new Map<EqualAreaProjection, ProjectedView>();
   #legend: { view: AnalysisView | undefined; measure: Measure; indicators: boolean; legend: MapLegend } | undefined;
-  #size = { width: 0, height: 0 };
-  #resize: ResizeObserver | undefined;
+  /** The map area's size; a change asks for an update, which draws. */
+  readonly #size = new SizeController(this, () => this.renderRoot.querySelector('.map'), { width: 0, height: 0 });
   #hoverEntry = -1;
-  #prepare = new IdleWork();
+  readonly #prepare = new IdleWorkController(this);
   readonly #scratch = new Float64Array(2);
   readonly #dots = new DotRaster();
 
@@ -78,11 +80,11 @@ export class DgEqualAreaView extends SliceMapElement {
       ${this.notice ? html`<p class="notice" role="status">${this.notice}</p>` : nothing}<slot name="notice"></slot>
       <div class="body">
         <div class="map" @pointermove=${this.#onPointerMove} @pointerdown=${this.#onPointerMove} @pointerleave=${this.#onPointerLeave}>
-          <canvas role="img" aria-label=${mapDescription(this.view, this.slice, this.measure, this.projection)}></canvas>
-          ${tip === undefined ? nothing : html`<div class="tip" role="tooltip" style=${styleMap({ left: `${tip.x}px`, top: `${tip.y}px` })}>${tip.text}</div>`}
+          <canvas role="img" aria-label=${mapDescription(this.view, this.slice, this.measure, PROJECTION_NAMES[this.projection])}></canvas>
+          ${tip === undefined ? nothing : html`<div class="tip" role="tooltip" style=${styleMap({ left: `${tip.x}px`, top: `${tip.y}px` })}>${tip.lines.map((line) => html`<div>${line}</div>`)}</div>`}
         </div>
         <div class="legend" role="group" aria-label="Legend">
-          <div>Occupied cells: ${legend.unit}</div>
+          <div>${legend.title}</div>
           <div class="ramp" style=${styleMap({ background: scaleGradientCss('to top') })}>
             ${legend.ticks.map((t) => html`<span class="tick" style=${styleMap({ bottom: `${t.position * 100}%` })}>${t.label}</span>`)}
           </div>
@@ -91,31 +93,6 @@ export class DgEqualAreaView extends SliceMapElement {
         </div>
       </div>
       <p class="caption">${PROJECTION_CAPTIONS[this.projection]}</p>`;
-  }
-
-  override firstUpdated(): void {
-    const map = this.renderRoot.querySelector('.map');
-    if (map === null) return;
-    this.#resize = new ResizeObserver(([entry]) => {
-      this.#size = { width: entry.contentRect.width, height: entry.contentRect.height };
-      this.#draw();
-    });
-    this.#resize.observe(map);
-  }
-
-  override connectedCallback(): void {
-    super.connectedCallback();
-    const map = this.hasUpdated ? this.renderRoot.querySelector('.map') : null;
-    if (map !== null) {
-      this.#resize?.observe(map);
-      this.#prepareInIdleTime();
-    }
-  }
-
-  override disconnectedCallback(): void {
-    super.disconnectedCallback();
-    this.#resize?.disconnect();
-    this.#prepare.cancel();
   }
 
   override willUpdate(changed: PropertyValues<this>): void {
@@ -143,7 +120,7 @@ export class DgEqualAreaView extends SliceMapElement {
     const [width, mapHeight] = this.#figureSize();
     const legend = this.#currentLegend();
     const layout = figureLayout(width, mapHeight, legend.indicators.length > 0);
-    const figure = { layout, legend, title: sliceTitle(this.view, this.slice), projection: this.projection, picture: this.#picture(legend) };
+    const figure = { layout, legend, title: sliceTitle(this.view?.slices[this.slice]), projection: this.projection, picture: this.#picture(legend) };
     return figurePng(this.#projectedView(), figure, PNG_RATIO);
   }
 
@@ -225,7 +202,7 @@ export class DgEqualAreaView extends SliceMapElement {
     const projected = this.#projectedView();
     const entry = entryAtMapPoint(projected.reference, this.#frame(projected), this.#lookup, this.slice, x, y, this.#scratch);
     this.#setHover(entry);
-    if (entry >= 0) this.tip = { x: x + 14 < box.width - 240 ? x + 14 : Math.max(0, x - 250), y: y + 14, text: cellSummary(view, entry) };
+    if (entry >= 0) this.tip = { x: x + 14 < box.width - 240 ? x + 14 : Math.max(0, x - 250), y: y + 14, lines: cellTipLines(view, entry) };
   };
 
   #onPointerLeave = (): void => this.#setHover(-1);

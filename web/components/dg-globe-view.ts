@@ -11,12 +11,13 @@ import * as maplibregl from 'maplibre-gl';
 import workerUrl from 'maplibre-gl/dist/maplibre-gl-worker.mjs?url';
 import { countScale, type CountScale } from '../colour/measure-scale';
 import {
-  cellLayerId, cellTooltipLines, fitZoom, globeLegend, globeViewStyles, mapRegionLabel, offlineStyle, pointDecision, pointNotice,
-  prepareSliceLayerData, SliceCache, sliceLayers, slicePointCount, type SliceLayerData,
+  cellLayerId, fitZoom, GLOBE_MAP_NAMES, globeLegend, globeViewStyles, offlineStyle, pointDecision, pointNotice,
+  prepareSliceLayerData, SliceCache, sliceLayers, slicePointCount, type GlobeProjection, type SliceLayerData,
 } from '../map';
-import { IdleWork } from '../figure';
+import { IdleWorkController, SizeController } from '../controllers';
 import type { AnalysisView, Measure } from '../protocol';
 import { measureMax } from '../state/view-options';
+import { cellTipLines, mapDescription } from '../text';
 
 /** Slices whose layers stay loaded (hidden) after being shown, so stepping back re-uploads nothing. */
 const KEPT_SLICES = 24;
@@ -34,7 +35,7 @@ export class DgGlobeView extends SliceMapElement {
     projection: { type: String }, showAllPoints: { type: Boolean, attribute: 'show-all-points' },
     _zoomLevel: { state: true }, _hover: { state: true }, _failed: { state: true },
   };
-  declare projection: 'globe' | 'flat';
+  declare projection: GlobeProjection;
   declare showAllPoints: boolean;
   /** Whole zoom level (rounded down), for the point budget's zoom rule. */
   declare _zoomLevel: number;
@@ -43,13 +44,12 @@ export class DgGlobeView extends SliceMapElement {
 
   #map: maplibregl.Map | undefined = undefined;
   #overlay: MapLibreOverlay | undefined = undefined;
-  #resize: ResizeObserver | undefined = undefined;
   readonly #cache = new SliceCache<SliceLayerData>(KEPT_SLICES);
   #scale: { view: AnalysisView; measure: Measure; scale: CountScale } | undefined = undefined;
   #hoverKey = '';
   /** Set on style.load (isStyleLoaded() stays false while the graticule source loads). */
   #styleReady = false;
-  readonly #prefetch = new IdleWork();
+  readonly #prefetch = new IdleWorkController(this);
 
   constructor() {
     super();
@@ -58,6 +58,8 @@ export class DgGlobeView extends SliceMapElement {
     this._zoomLevel = 0;
     this._hover = null;
     this._failed = false;
+    // maplibre's own trackResize follows the window; the map follows this element instead.
+    new SizeController(this, () => this, { width: 0, height: 0, onResize: () => this.#map?.resize() });
   }
 
   override connectedCallback(): void {
@@ -67,8 +69,6 @@ export class DgGlobeView extends SliceMapElement {
 
   override disconnectedCallback(): void {
     super.disconnectedCallback();
-    this.#resize?.disconnect();
-    this.#resize = undefined;
     this.#prefetch.cancel();
     this.#map?.remove(); // removes the overlay control too, which finalizes deck
     this.#map = undefined;
@@ -97,7 +97,7 @@ export class DgGlobeView extends SliceMapElement {
     if (!map) return;
     if (changed.has('projection') && this.#styleReady) this.#applyProjection(map);
     if (!LAYER_INPUTS.some((key) => changed.has(key)) && !changed.has('projection')) return;
-    map.getCanvas().setAttribute('aria-label', mapRegionLabel(this.view, this.slice, this.measure, this.projection));
+    map.getCanvas().setAttribute('aria-label', this.#description());
     if (changed.has('view') || changed.has('measure') || changed.has('slice')) this.#setHover(null);
     const centre = changed.has('view') && this.#dataCentre();
     if (centre) map.jumpTo({ center: centre }); // a new analysis: face its data (slice steps keep the camera)
@@ -149,9 +149,11 @@ export class DgGlobeView extends SliceMapElement {
       onHover: (info) => this.#picked(info), onClick: (info) => this.#picked(info),
     });
     map.addControl(this.#overlay);
-    this.#resize = new ResizeObserver(() => this.#map?.resize());
-    this.#resize.observe(this);
     this.#syncLayers();
+  }
+
+  #description(): string {
+    return mapDescription(this.view, this.slice, this.measure, GLOBE_MAP_NAMES[this.projection]);
   }
 
   /** The current slice's spherical centroid as [lon, lat], if it has one. */
@@ -232,7 +234,7 @@ export class DgGlobeView extends SliceMapElement {
     const notice = pointNotice(decision, count);
     const hover = this._hover;
     return html`
-      <div class="map" role="region" aria-label=${mapRegionLabel(view, slice, measure, this.projection)}></div>
+      <div class="map" role="region" aria-label=${this.#description()}></div>
       <div class="zoom">
         <button type="button" aria-label="Zoom in" @click=${() => this.#map?.zoomIn()}>+</button>
         <button type="button" aria-label="Zoom out" @click=${() => this.#map?.zoomOut()}>−</button>
@@ -242,7 +244,7 @@ export class DgGlobeView extends SliceMapElement {
         ${notice ? html`<p role="status">${notice}</p>` : nothing}
         ${this.projection === 'flat' ? html`<p>Web Mercator is not equal-area: cells far from the equator look bigger than they are. Compare areas in the Equal Earth or polar views.</p>` : nothing}
       </div>` : nothing}
-      ${hover && view ? html`<div class="tooltip ${hover.x > this.clientWidth / 2 ? 'west' : ''}" style="left:${hover.x}px;top:${hover.y}px">${cellTooltipLines(view, hover.entry).map((line) => html`<div>${line}</div>`)}</div>` : nothing}
+      ${hover && view ? html`<div class="tooltip ${hover.x > this.clientWidth / 2 ? 'west' : ''}" style="left:${hover.x}px;top:${hover.y}px">${cellTipLines(view, hover.entry).map((line) => html`<div>${line}</div>`)}</div>` : nothing}
     `;
   }
 }

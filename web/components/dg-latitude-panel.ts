@@ -4,31 +4,39 @@
  * Shares (not counts) so that a small slice and the whole range compare; counts are in the
  * labels and the readout.
  */
-import { LitElement, css, html, svg, unsafeCSS, type PropertyValues } from 'lit';
+import { LitElement, css, html, svg, unsafeCSS } from 'lit';
 import { guard } from 'lit/directives/guard.js';
 import type { AnalysisView } from '../protocol';
 import {
-  CHART_FONT, SizeController, bandReadout, clampSlice, dataIndex, formatNumber, latitudeDescription, latitudeFigure, latitudeLayout, memoLast,
-  renderMarks, sliceBandShares, sliceTitle, svgToPngBlob, viewIndicatorKinds, type LatitudeLayout,
+  CHART_FONT, bandReadout, clampSlice, dataIndex, latitudeDescription, latitudeFigure, latitudeLayout, memoLast,
+  renderMarks, sliceBandShares, svgToPngBlob, viewIndicatorKinds, type LatitudeLayout,
 } from '../charts';
+import { RovingFocusController, SizeController } from '../controllers';
+import { countWords, sliceTitle } from '../text';
 
 export class DgLatitudePanel extends LitElement {
   static override properties = {
     view: { attribute: false },
     slice: { type: Number },
     pointed: { state: true },
-    focused: { state: true },
   };
 
   declare view: AnalysisView | undefined;
   declare slice: number;
   /** Band under the pointer. */
   declare private pointed: number | undefined;
-  /** Band with keyboard focus. */
-  declare private focused: number | undefined;
-  private moveFocus = false;
   /** The panel's own width sets the chart's; its height follows from the chart. */
-  private readonly size = new SizeController(this, () => this, 360, 1);
+  private readonly size = new SizeController(this, () => this, { width: 360, height: 1 });
+  /** Up goes north (bands count from the South Pole); Home and End go to the northernmost and southernmost band. */
+  private readonly roving = new RovingFocusController(this, {
+    container: () => this.renderRoot.querySelector('.hits'),
+    attribute: 'data-band',
+    range: () => {
+      const bands = this.view?.latitude.bands ?? 0;
+      return bands === 0 ? undefined : [0, bands - 1];
+    },
+    keys: { ArrowUp: 1, ArrowDown: -1, Home: 'high', End: 'low' },
+  });
 
   private readonly layoutOf = memoLast((view: AnalysisView, slice: number, width: number): LatitudeLayout =>
     latitudeLayout({ latitude: view.latitude, slice, sliceName: view.slices[slice].name, kinds: viewIndicatorKinds(view), width }),
@@ -41,7 +49,7 @@ export class DgLatitudePanel extends LitElement {
     const readouts: string[] = [];
     for (let b = 0; b < view.latitude.bands; b++) readouts.push(bandReadout(view.latitude, slice, name, b, kinds));
     const total = sliceBandShares(view.latitude, slice).total;
-    const summary = `${sliceTitle(view.slices[slice])}: ${formatNumber(total)} occurrences placed. Point at a band for its counts.`;
+    const summary = `${sliceTitle(view.slices[slice])}: ${countWords(total, 'occurrence')} placed. Point at a band for its counts.`;
     return { readouts, summary, description: latitudeDescription(view.latitude, slice, name, kinds) };
   });
 
@@ -50,7 +58,6 @@ export class DgLatitudePanel extends LitElement {
     this.view = undefined;
     this.slice = 0;
     this.pointed = undefined;
-    this.focused = undefined;
   }
 
   static override styles = css`
@@ -82,41 +89,20 @@ export class DgLatitudePanel extends LitElement {
     const layout = this.layoutOf(view, slice, this.size.width);
     const text = this.textOf(view, slice);
     const { width, height, plotLeft, plotRight, bandTop, bandBottom } = layout;
-    const tabStop = this.focused ?? view.latitude.bands - 1;
-    const shown = this.pointed ?? this.focused;
+    const north = view.latitude.bands - 1;
+    const shown = this.pointed ?? this.roving.focused;
     return html`<div class="chart" style="width:${width}px;height:${height}px">
         <svg class="drawing" role="img" aria-label=${text.description} width=${width} height=${height} viewBox="0 0 ${width} ${height}" font-family=${CHART_FONT}>
           ${guard([layout], () => renderMarks(layout.marks))}
         </svg>
         <svg class="hits" role="list" aria-label="Latitude bands (arrow keys move)" width=${width} height=${height}
-          @keydown=${this.onKey} @pointerover=${this.onPointer} @pointerleave=${this.onLeave} @focusin=${this.onFocus} @focusout=${this.onBlur}>
+          @keydown=${this.roving.onKeyDown} @pointerover=${this.onPointer} @pointerleave=${this.onLeave} @focusin=${this.roving.onFocusIn} @focusout=${this.roving.onFocusOut}>
           ${text.readouts.map((readout, b) => svg`<rect role="listitem" data-band=${b} x=${plotLeft} y=${bandTop[b]} width=${plotRight - plotLeft}
-            height=${bandBottom[b] - bandTop[b]} tabindex=${b === tabStop ? 0 : -1} aria-label=${readout}></rect>`)}
+            height=${bandBottom[b] - bandTop[b]} tabindex=${this.roving.tabIndex(b, north)} aria-label=${readout}></rect>`)}
         </svg>
       </div>
       <p class="readout">${shown === undefined ? text.summary : text.readouts[shown]}</p>`;
   }
-
-  protected override updated(changed: PropertyValues): void {
-    if (changed.has('focused') && this.moveFocus && this.focused !== undefined) {
-      this.moveFocus = false;
-      this.renderRoot.querySelector<SVGRectElement>(`.hits rect[data-band="${this.focused}"]`)?.focus();
-    }
-  }
-
-  /** Up goes north (bands count from the South Pole); Home and End go to the northernmost and southernmost band. */
-  private readonly onKey = (event: KeyboardEvent): void => {
-    const from = dataIndex(event, 'data-band');
-    const bands = this.view?.latitude.bands ?? 0;
-    if (from === undefined || bands === 0) return;
-    const to = event.key === 'ArrowUp' ? from + 1 : event.key === 'ArrowDown' ? from - 1 : event.key === 'Home' ? bands - 1 : event.key === 'End' ? 0 : undefined;
-    if (to === undefined) return;
-    this.moveFocus = true;
-    this.focused = Math.min(bands - 1, Math.max(0, to));
-    // Handled here, so the app's Home/End (first/last slice) do not act as well.
-    event.preventDefault();
-    event.stopPropagation();
-  };
 
   private readonly onPointer = (event: PointerEvent): void => {
     this.pointed = dataIndex(event, 'data-band');
@@ -124,15 +110,6 @@ export class DgLatitudePanel extends LitElement {
 
   private readonly onLeave = (): void => {
     this.pointed = undefined;
-  };
-
-  private readonly onFocus = (event: FocusEvent): void => {
-    this.focused = dataIndex(event, 'data-band');
-  };
-
-  private readonly onBlur = (event: FocusEvent): void => {
-    const next = event.relatedTarget;
-    if (!(next instanceof Element && next.closest('.hits') !== null)) this.focused = undefined;
   };
 }
 

@@ -5,16 +5,20 @@
  */
 import { LitElement, css, html, svg, type SVGTemplateResult } from 'lit';
 import type { SliceMetrics } from '../../src/analysis';
+import { SizeController } from '../controllers';
 import type { SliceRange } from '../state/slice-range';
+import { ageRange, sliceTitle } from '../text';
 import { panelStyles } from './shared-styles';
 
 /** Muted tints for alternating chart periods (ours; labels carry the names, colour only separates). */
 const PERIOD_TINTS = ['#d9e4ec', '#e9e1d2', '#dfe8d8', '#e8dbe4', '#d8e6e4', '#ece6d0'];
 const PLAY_STEP_MS = 700;
 const HEIGHT = 46;
+/** Least width the strip is drawn at, CSS px. */
+const MIN_WIDTH = 100;
 
 export class DgTimeStrip extends LitElement {
-  static override properties = { slices: { attribute: false }, periods: { attribute: false }, slice: { type: Number }, range: { attribute: false }, wholeScale: { type: Boolean }, playing: { state: true }, width: { state: true } };
+  static override properties = { slices: { attribute: false }, periods: { attribute: false }, slice: { type: Number }, range: { attribute: false }, wholeScale: { type: Boolean }, playing: { state: true } };
   declare slices: readonly SliceMetrics[];
   declare periods: readonly string[];
   declare slice: number;
@@ -22,9 +26,8 @@ export class DgTimeStrip extends LitElement {
   declare range: SliceRange;
   declare wholeScale: boolean;
   declare playing: boolean;
-  /** Drawn width in CSS pixels, so that labels are not stretched. */
-  declare width: number;
-  private readonly resizer = new ResizeObserver((entries) => (this.width = Math.max(100, entries[0].contentRect.width)));
+  /** The strip's drawn size in CSS pixels, so that labels are not stretched. */
+  private readonly size = new SizeController(this, () => this.renderRoot.querySelector('.strip'), { width: 1000, height: HEIGHT });
   private timer: ReturnType<typeof setInterval> | undefined;
   private dragging = false;
 
@@ -36,7 +39,6 @@ export class DgTimeStrip extends LitElement {
     this.range = { from: 0, to: 0 };
     this.wholeScale = false;
     this.playing = false;
-    this.width = 1000;
   }
 
   static override styles = [panelStyles, css`
@@ -47,14 +49,8 @@ export class DgTimeStrip extends LitElement {
     text { font-size: 10px; fill: #3a444d; pointer-events: none; }
   `];
 
-  override firstUpdated(): void {
-    const strip = this.renderRoot.querySelector('.strip');
-    if (strip !== null) this.resizer.observe(strip);
-  }
-
   override disconnectedCallback(): void {
     super.disconnectedCallback();
-    this.resizer.disconnect();
     this.stop();
   }
 
@@ -119,11 +115,11 @@ export class DgTimeStrip extends LitElement {
     const { from } = this.range;
     const current = this.slices[this.slice];
     const { old, young } = this.span;
-    const w = this.width;
+    const w = Math.max(MIN_WIDTH, this.size.width);
     const x = (ma: number) => ((old - ma) / (old - young || 1)) * w;
     const periodIndex = new Map<string, number>();
     for (const p of this.periods) if (!periodIndex.has(p)) periodIndex.set(p, periodIndex.size);
-    const valueText = current === undefined ? 'no slices' : `${current.name}, ${current.baseMa}–${current.topMa} Ma, slice ${this.slice + 1} of ${n}`;
+    const valueText = current === undefined ? 'no slices' : `${sliceTitle(current)}, slice ${this.slice + 1} of ${n}`;
     return html`
       <div class="row">
         <button @click=${this.togglePlay} aria-label=${this.playing ? 'Stop stepping through slices' : 'Play: step through slices'}>${this.playing ? '■ Stop' : '▶ Play'}</button>
@@ -140,7 +136,7 @@ export class DgTimeStrip extends LitElement {
               fill="none" stroke="#0b2a45" stroke-width="2.5" vector-effect="non-scaling-stroke"></rect>`}
           </svg>
         </div>
-        <span class="current" aria-live="polite">${current === undefined ? '' : html`${current.name} <span class="hint">${current.baseMa}–${current.topMa} Ma</span>`}</span>
+        <span class="current" aria-live="polite">${current === undefined ? '' : html`${current.name} <span class="hint">${ageRange(current)}</span>`}</span>
         <label class="hint"><input type="checkbox" name="whole-scale" .checked=${this.wholeScale} @change=${(e: Event) => this.dispatchEvent(new CustomEvent('whole-scale',
           { detail: { wholeScale: (e.target as HTMLInputElement).checked }, bubbles: true, composed: true }))}> whole scale</label>
       </div>`;

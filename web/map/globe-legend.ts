@@ -3,17 +3,17 @@ import { css, html, nothing, type TemplateResult } from 'lit';
 import { INDICATOR_COLOURS, OVERLAY_COLOURS, rgbCss } from '../colour/layer-colours';
 import { scaleGradientCss, type CountScale } from '../colour/measure-scale';
 import type { Measure } from '../protocol';
-import { MEASURE_UNITS, type LayerVisibility } from '../state/view-options';
-import { legendTicks } from './map-labels';
+import type { LayerVisibility } from '../state/view-options';
+import { legendTicks, legendTitle } from '../text';
 
 export function globeLegend(scale: CountScale, measure: Measure, on: LayerVisibility, indicatorKinds: readonly string[] | undefined): TemplateResult {
   const swatch = (colour: readonly number[], label: string, shape: 'line' | 'dot'): TemplateResult =>
     html`<span class="key"><span class=${shape} style="background:${rgbCss(colour)}"></span>${label}</span>`;
   return html`<div class="legend">
     ${on.cells ? html`
-      <div class="unit">${MEASURE_UNITS[measure]} (log scale)</div>
+      <div class="unit">${legendTitle(measure)}</div>
       <div class="gradient" style="background:${scaleGradientCss()}"></div>
-      <div class="ticks">${legendTicks(scale).map((t) => html`<span style="left:${t.percent}%">${t.label}</span>`)}</div>` : nothing}
+      <div class="ticks">${legendTicks(scale).map((t) => html`<span style="left:${t.position * 100}%">${t.label}</span>`)}</div>` : nothing}
     <div class="keys">
       ${on.hull ? swatch(OVERLAY_COLOURS.hull, 'convex hull', 'line') : nothing}
       ${on.spanningTree ? swatch(OVERLAY_COLOURS.spanningTree, 'spanning tree', 'line') : nothing}

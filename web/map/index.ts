@@ -5,7 +5,7 @@ export { globeLegend, globeLegendStyles } from './globe-legend';
 export { angleBoundDeg, LIFT_MARGIN_M, liftForCapMetres, liftMatrix } from './globe-lift';
 export { globeViewStyles } from './globe-view-styles';
 export { HORIZON_CULL, HorizonCullExtension } from './horizon-cull';
-export { cellTooltipLines, legendTicks, mapRegionLabel, type LegendTick } from './map-labels';
+export { GLOBE_MAP_NAMES, type GlobeProjection } from './map-names';
 export { graticule, GRATICULE_LAYER_ID, GRATICULE_STEP_DEG, GRATICULE_VERTEX_STEP_DEG, offlineStyle } from './offline-style';
 export { POINT_DECISIONS, POINT_ZOOM, pointDecision, pointNotice, type PointDecision } from './point-budget';
 export { SliceCache } from './slice-cache';

@@ -4,6 +4,7 @@
  * cells only, unless the user asks for the points or zooms in far enough to look at detail.
  */
 import { POINT_BUDGET } from '../state/view-options';
+import { formatCount } from '../text';
 
 /** Zoom level from which points are drawn whatever their number. */
 export const POINT_ZOOM = 4;
@@ -19,6 +20,5 @@ export function pointDecision(count: number, layerOn: boolean, showAll: boolean,
 /** The on-screen sentence for points left out, or '' when there is nothing to say. */
 export function pointNotice(decision: PointDecision, count: number, budget = POINT_BUDGET): string {
   if (decision !== 'over-budget') return '';
-  const n = count.toLocaleString('en');
-  return `Places not drawn: ${n} in this slice, more than the budget of ${budget.toLocaleString('en')}. Zoom in to level ${POINT_ZOOM}, or ask for all points.`;
+  return `Places not drawn: ${formatCount(count)} in this slice, more than the budget of ${formatCount(budget)}. Zoom in to level ${POINT_ZOOM}, or ask for all points.`;
 }

@@ -38,7 +38,7 @@ export function drawFigure(ctx: Canvas2D, projected: ProjectedView, figure: Figu
   ctx.font = `${TEXT_SIZE}px ${FIGURE_FONT}`;
   ctx.fillStyle = 'rgb(29, 35, 40)';
   const { ramp } = layout;
-  ctx.fillText(`Occupied cells: ${legend.unit}`, ramp.x, layout.unitY);
+  ctx.fillText(legend.title, ramp.x, layout.unitY);
   const gradient = ctx.createLinearGradient(ramp.x, 0, ramp.x + ramp.width, 0);
   for (const stop of legend.stops) gradient.addColorStop(stop.offset, stop.colour);
   ctx.fillStyle = gradient;

@@ -8,12 +8,13 @@ import { geoGraticule10, geoPath, type GeoProjection } from 'd3-geo';
 import { OVERLAY_COLOURS, rgbCss } from '../colour/layer-colours';
 import type { AnalysisView, Measure } from '../protocol';
 import { measureColumn, type LayerVisibility } from '../state/view-options';
+import { mapDescription, sliceTitle } from '../text';
 import { escapeXml } from './escape-xml';
 import { FIGURE_FONT, TEXT_SIZE, TITLE_SIZE, figureLayout, keyOffsets, type FigureLayout } from './figure-layout';
+import { hasSlice } from './has-slice';
 import { indicatorColour, mapLegend, type MapLegend } from './map-legend';
-import { PROJECTION_CAPTIONS, SPHERE, fittedProjection, type EqualAreaProjection } from './map-projection';
+import { PROJECTION_CAPTIONS, PROJECTION_NAMES, SPHERE, fittedProjection, type EqualAreaProjection } from './map-projection';
 import { MAP_STYLE, treeWidth } from './map-style';
-import { hasSlice, mapDescription, sliceTitle } from './map-text';
 import { projectPointsInto } from './project-points';
 import type { ViewGeometry } from './view-geometry';
 
@@ -41,12 +42,12 @@ export function mapSvg(figure: MapFigure): string {
   const layout = figureLayout(figure.width, figure.mapHeight, legend.indicators.length > 0);
   const { x0, y0, x1, y1 } = layout.map;
   const projection = fittedProjection(figure.projection, x0, y0, x1, y1);
-  const title = escapeXml(sliceTitle(view, figure.slice));
+  const title = escapeXml(sliceTitle(view?.slices[figure.slice]));
   const out: string[] = [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<svg xmlns="http://www.w3.org/2000/svg" width="${layout.width}" height="${layout.height}" viewBox="0 0 ${layout.width} ${layout.height}" font-family="${FIGURE_FONT}">`,
     `<title>${title}</title>`,
-    `<desc>${escapeXml(mapDescription(view, figure.slice, figure.measure, figure.projection))}</desc>`,
+    `<desc>${escapeXml(mapDescription(view, figure.slice, figure.measure, PROJECTION_NAMES[figure.projection]))}</desc>`,
     `<defs><linearGradient id="${RAMP_ID}" x1="0" y1="0" x2="1" y2="0">`,
     ...legend.stops.map((s) => `<stop offset="${r1(s.offset * 100)}%" stop-color="${s.colour}"/>`),
     '</linearGradient></defs>',
@@ -141,7 +142,7 @@ function indicatorsSvg(out: string[], projection: GeoProjection, view: AnalysisV
 function legendSvg(out: string[], layout: FigureLayout, legend: MapLegend): void {
   const { ramp } = layout;
   out.push(`<g id="legend" font-size="${TEXT_SIZE}" fill="rgb(29, 35, 40)">`,
-    `<text x="${ramp.x}" y="${layout.unitY}">${escapeXml(`Occupied cells: ${legend.unit}`)}</text>`,
+    `<text x="${ramp.x}" y="${layout.unitY}">${escapeXml(legend.title)}</text>`,
     `<rect x="${ramp.x}" y="${ramp.y}" width="${ramp.width}" height="${ramp.height}" fill="url(#${RAMP_ID})" stroke="rgb(110, 118, 126)" stroke-width="0.5"/>`);
   for (const tick of legend.ticks) {
     const x = r1(ramp.x + tick.position * ramp.width);

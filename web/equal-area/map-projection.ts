@@ -18,11 +18,11 @@ export const PROJECTION_CAPTIONS: Readonly<Record<EqualAreaProjection, string>> 
   'polar-south': 'Lambert azimuthal equal-area projection centred on the South Pole: southern hemisphere only',
 };
 
-/** Short names for labels. */
+/** What each map is called in labels: "Equal Earth map of slice …". */
 export const PROJECTION_NAMES: Readonly<Record<EqualAreaProjection, string>> = {
-  'equal-earth': 'Equal Earth',
-  'polar-north': 'north polar equal-area',
-  'polar-south': 'south polar equal-area',
+  'equal-earth': 'Equal Earth map',
+  'polar-north': 'north polar equal-area map',
+  'polar-south': 'south polar equal-area map',
 };
 
 /**

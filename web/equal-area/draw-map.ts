@@ -12,7 +12,7 @@ import type { DotRaster } from './dot-raster';
 import { indicatorColour } from './map-legend';
 import type { MapFrame } from './map-frame';
 import { MAP_STYLE, treeWidth } from './map-style';
-import { hasSlice } from './map-text';
+import { hasSlice } from './has-slice';
 import type { ProjectedView } from './projected-view';
 
 /** More places than this in a slice are drawn as pixels (see drawPlaces). */
