@@ -2,7 +2,7 @@ import type { CellTallies } from '../footprint/cell-tallies';
 import type { EqualAreaGrid } from '../grid/equal-area-grid';
 import { AsciiWriter } from './ascii-writer';
 import { fixed, DECIMALS } from './csv-text';
-import { splitAtAntimeridian } from './split-antimeridian';
+import { splitAtAntimeridian } from '../sphere';
 
 /** Longest step, in degrees, between vertices of an exported cell outline. */
 export const CELL_EDGE_STEP_DEG = 1;

@@ -10,16 +10,12 @@
  * once it encloses a pole. Readers of user files should check or rewind before calling.
  */
 import type { MultiPolygon, Polygon, Position } from 'geojson';
-import { splitAtAntimeridian } from '../export/split-antimeridian';
-import { RADIANS } from '../sphere/earth';
-import { writeUnitVector } from '../sphere/unit-vectors';
+import { ANTIPODAL_ARC, appendArcInterior, RADIANS, splitAtAntimeridian, writeUnitVector } from '../sphere';
 import { rotationMatrixFromQuaternionInto } from './rotation-matrix';
 import { unwrapRing, type LonLat } from './unwrap-ring';
 
 /** Longest step between vertices after densifying, degrees of arc, unless told otherwise. */
 export const DEFAULT_MAX_STEP_DEG = 1;
-/** An edge this close to 180° of arc (radians) joins near-antipodes: no one great circle. */
-const ANTIPODAL_EDGE = Math.PI - 1e-9;
 
 export interface GeometryReconstructionOptions {
   /** Longest step between vertices after densifying, degrees of arc (> 0). */
@@ -27,25 +23,19 @@ export interface GeometryReconstructionOptions {
 }
 
 /** Unit vectors of a closed ring's points with each edge divided into equal great-circle
- * steps of at most `maxStep` radians (vector slerp), the closing point not repeated. */
+ * steps of at most `maxStep` radians, the closing point not repeated. */
 function densifiedRing(ring: readonly Position[], maxStep: number, where: string): Float64Array {
   const last = ring.length - 1;
   if (ring.length < 4 || ring[0][0] !== ring[last][0] || ring[0][1] !== ring[last][1]) {
     throw new RangeError(`${where}: expected a closed ring of at least 4 positions, the last equal to the first.`);
   }
+  const vertices = new Float64Array(3 * ring.length);
+  for (let k = 0; k <= last; k++) writeUnitVector(ring[k][1], ring[k][0], vertices, 3 * k);
   const out: number[] = [];
-  const a = new Float64Array(3), b = new Float64Array(3);
   for (let k = 0; k < last; k++) {
-    writeUnitVector(ring[k][1], ring[k][0], a, 0);
-    writeUnitVector(ring[k + 1][1], ring[k + 1][0], b, 0);
-    const cross = Math.hypot(a[1] * b[2] - a[2] * b[1], a[2] * b[0] - a[0] * b[2], a[0] * b[1] - a[1] * b[0]);
-    const theta = Math.atan2(cross, a[0] * b[0] + a[1] * b[1] + a[2] * b[2]);
-    if (theta > ANTIPODAL_EDGE) throw new RangeError(`${where}, edge ${k + 1}: its ends are antipodal, so no single great circle joins them.`);
-    const steps = Math.max(1, Math.ceil(theta / maxStep));
-    out.push(a[0], a[1], a[2]);
-    for (let s = 1; s < steps; s++) {
-      const ka = Math.sin(((steps - s) / steps) * theta) / Math.sin(theta), kb = Math.sin((s / steps) * theta) / Math.sin(theta);
-      out.push(ka * a[0] + kb * b[0], ka * a[1] + kb * b[1], ka * a[2] + kb * b[2]);
+    out.push(vertices[3 * k], vertices[3 * k + 1], vertices[3 * k + 2]);
+    if (appendArcInterior(vertices, k, k + 1, maxStep, out) > ANTIPODAL_ARC) {
+      throw new RangeError(`${where}, edge ${k + 1}: its ends are antipodal, so no single great circle joins them.`);
     }
   }
   return Float64Array.from(out);

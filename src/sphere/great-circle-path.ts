@@ -1,47 +1,62 @@
 /**
- * Points along the great circle between two positions, for drawing: a map that joins vertices
- * with straight lines (in longitude/latitude or in its projection) then follows the true edge
- * to within the step. Longitudes stay continuous with the previous vertex (they may run past
- * ±180°), so a path crossing the antimeridian is not drawn the long way round.
+ * Points along great circles, for drawing and for carrying polygon edges through a rotation: a
+ * reader that joins vertices with straight lines (in longitude/latitude or in its projection)
+ * then follows the true edge to within the step.
  */
-import { DEGREES, RADIANS } from './earth';
+import { RADIANS } from './earth';
+import { unitVectorAngle } from './distance';
+import { unitVectorsToDegreesInto, writeUnitVector } from './unit-vectors';
+
+/** An arc this close to π radians joins near-antipodes: no one great circle joins them. */
+export const ANTIPODAL_ARC = Math.PI - 1e-9;
+
+/**
+ * Appends to `out` the unit vectors (x, y, z) of the points that divide the great-circle arc
+ * from vector i to vector j of `xyz` (interleaved [x0, y0, z0, x1, …]) into equal steps of at
+ * most `maxStepRad`, both ends left out, by spherical linear interpolation (Shoemake 1985).
+ * Returns the arc's angle in radians; when it exceeds ANTIPODAL_ARC nothing is appended and the
+ * caller decides what an edge between antipodes means.
+ */
+export function appendArcInterior(xyz: Float64Array, i: number, j: number, maxStepRad: number, out: number[]): number {
+  const theta = unitVectorAngle(xyz, i, j);
+  if (theta > ANTIPODAL_ARC) return theta;
+  const steps = Math.max(1, Math.ceil(theta / maxStepRad));
+  const sinTheta = Math.sin(theta);
+  const ax = xyz[3 * i], ay = xyz[3 * i + 1], az = xyz[3 * i + 2];
+  const bx = xyz[3 * j], by = xyz[3 * j + 1], bz = xyz[3 * j + 2];
+  for (let s = 1; s < steps; s++) {
+    const ka = Math.sin(((steps - s) / steps) * theta) / sinTheta, kb = Math.sin((s / steps) * theta) / sinTheta;
+    out.push(ka * ax + kb * bx, ka * ay + kb * by, ka * az + kb * bz);
+  }
+  return theta;
+}
 
 /**
  * Appends [lon, lat] pairs (degrees) of the great-circle arc from (lat0, lon0) to (lat1, lon1)
  * to `out`, leaving out the start point and ending with the end point; no step is longer than
- * `maxStepDeg`. `startLon` is the longitude the start was written with (continuous). Returns
- * the longitude written for the end point. Antipodal ends have no unique arc: the straight
- * end point is written alone.
+ * `maxStepDeg`. Longitudes stay continuous with the previous vertex (they may run past ±180°),
+ * so a path crossing the antimeridian is not drawn the long way round: `startLon` is the
+ * longitude the start was written with. Returns the longitude written for the end point.
+ * Antipodal ends have no unique arc: the end point is written alone.
  */
 export function appendGreatCircleArc(
   lat0: number, lon0: number, lat1: number, lon1: number, maxStepDeg: number, startLon: number, out: number[],
 ): number {
-  const phi0 = lat0 * RADIANS, lambda0 = lon0 * RADIANS, phi1 = lat1 * RADIANS, lambda1 = lon1 * RADIANS;
-  const x0 = Math.cos(phi0) * Math.cos(lambda0), y0 = Math.cos(phi0) * Math.sin(lambda0), z0 = Math.sin(phi0);
-  const x1 = Math.cos(phi1) * Math.cos(lambda1), y1 = Math.cos(phi1) * Math.sin(lambda1), z1 = Math.sin(phi1);
-  // Angle by atan2(|a × b|, a · b): accurate for short and nearly antipodal arcs alike.
-  const cx = y0 * z1 - z0 * y1, cy = z0 * x1 - x0 * z1, cz = x0 * y1 - y0 * x1;
-  const angle = Math.atan2(Math.hypot(cx, cy, cz), x0 * x1 + y0 * y1 + z0 * z1);
-  const steps = Math.PI - angle < 1e-12 ? 1 : Math.max(1, Math.ceil((angle * DEGREES) / maxStepDeg));
-  const sinAngle = Math.sin(angle);
+  const ends = new Float64Array(6);
+  writeUnitVector(lat0, lon0, ends, 0);
+  writeUnitVector(lat1, lon1, ends, 3);
+  const between: number[] = [];
+  appendArcInterior(ends, 0, 1, maxStepDeg * RADIANS, between);
+  const n = between.length / 3;
+  const lat = new Float64Array(n), lon = new Float64Array(n);
+  unitVectorsToDegreesInto(Float64Array.from(between), lat, lon);
   let previousLon = startLon;
-  for (let k = 1; k <= steps; k++) {
-    let lat: number, lon: number;
-    if (k === steps) {
-      lat = lat1;
-      lon = lon1;
-    } else {
-      // Spherical linear interpolation of the unit vectors (Shoemake 1985).
-      const t = k / steps;
-      const a = Math.sin((1 - t) * angle) / sinAngle, b = Math.sin(t * angle) / sinAngle;
-      const x = a * x0 + b * x1, y = a * y0 + b * y1, z = a * z0 + b * z1;
-      lat = Math.atan2(z, Math.hypot(x, y)) * DEGREES;
-      lon = Math.atan2(y, x) * DEGREES;
-    }
-    lon = continuousLongitude(lon, previousLon);
-    out.push(lon, lat);
-    previousLon = lon;
+  for (let k = 0; k < n; k++) {
+    previousLon = continuousLongitude(lon[k], previousLon);
+    out.push(previousLon, lat[k]);
   }
+  previousLon = continuousLongitude(lon1, previousLon);
+  out.push(previousLon, lat1);
   return previousLon;
 }
 

@@ -10,4 +10,5 @@ export { polygonAreaSr, polygonAreaKm2 } from './polygon-area';
 export { minimumSpanningTree, type SpanningTree } from './minimum-spanning-tree';
 export { latitudeStats, type LatitudeStats } from './latitude-stats';
 export { sphericalCentroid, CENTROID_UNDEFINED_BELOW, type SphericalCentroid } from './spherical-centroid';
-export { appendGreatCircleArc, continuousLongitude } from './great-circle-path';
+export { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongitude } from './great-circle-path';
+export { splitAtAntimeridian, type Ring } from './split-antimeridian';

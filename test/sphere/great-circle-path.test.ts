@@ -1,6 +1,7 @@
 import { geoDistance, geoInterpolate } from 'd3-geo';
 import { describe, expect, it } from 'vitest';
-import { appendGreatCircleArc, continuousLongitude } from '../../src/sphere/great-circle-path';
+import { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongitude } from '../../src/sphere/great-circle-path';
+import { degreesToUnitVectors, unitVectorsToDegrees } from '../../src/sphere/unit-vectors';
 
 const RAD = Math.PI / 180;
 
@@ -8,6 +9,28 @@ const RAD = Math.PI / 180;
 function gap(a: [number, number], b: [number, number]): number {
   return geoDistance(a, b) / RAD;
 }
+
+describe('appendArcInterior', () => {
+  it('divides the arc into equal steps that d3-geo interpolates at the same fractions, ends left out', () => {
+    const ends = degreesToUnitVectors(Float64Array.of(-35, 62), Float64Array.of(100, -170));
+    const out: number[] = [];
+    const theta = appendArcInterior(ends, 0, 1, 3 * RAD, out);
+    // d3-geo's geoDistance is the outside reference for the arc's angle.
+    expect(theta).toBeCloseTo(geoDistance([100, -35], [-170, 62]), 14);
+    const steps = Math.ceil(theta / (3 * RAD));
+    expect(out.length).toBe(3 * (steps - 1));
+    const { lat, lon } = unitVectorsToDegrees(Float64Array.from(out));
+    const along = geoInterpolate([100, -35], [-170, 62]);
+    for (let k = 0; k < lat.length; k++) expect(gap([lon[k], lat[k]], along((k + 1) / steps))).toBeLessThan(1e-9);
+  });
+
+  it('appends nothing and reports the angle for antipodal ends', () => {
+    const ends = degreesToUnitVectors(Float64Array.of(20, -20), Float64Array.of(30, -150));
+    const out: number[] = [];
+    expect(appendArcInterior(ends, 0, 1, RAD, out)).toBeGreaterThan(ANTIPODAL_ARC);
+    expect(out).toEqual([]);
+  });
+});
 
 describe('appendGreatCircleArc', () => {
   it('puts every vertex on the great circle d3-geo interpolates between the ends', () => {

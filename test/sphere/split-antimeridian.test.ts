@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { geoArea } from 'd3-geo';
 import { booleanClockwise, booleanValid, polygon } from '@turf/turf';
-import { splitAtAntimeridian, type Ring } from '../../src/export/split-antimeridian';
+import { splitAtAntimeridian, type Ring } from '../../src/sphere/split-antimeridian';
 
 /** d3-geo reads rings clockwise (STACK.md): reverse our counter-clockwise ones before measuring. */
 const d3Area = (ring: Ring) => geoArea({ type: 'Polygon', coordinates: [[...ring].reverse()] });
