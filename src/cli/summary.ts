@@ -1,4 +1,5 @@
 import { EXCLUSION_REASONS, exclusionStatus, type AnalysisResult } from '../analysis';
+import { SLICE_CAUTION, sliceCautions, type SliceCaution, type SliceNumbers } from '../footprint';
 import type { RotationModel } from '../rotation';
 import type { RejectedRow } from '../table/occurrence-table';
 
@@ -27,15 +28,7 @@ export function printSummary(summary: RunSummary): void {
   out.push(...placementLines(result, summary.model));
   const occupied = result.slices.filter((s) => s.occurrences > 0).length;
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);
-  const noHull = result.slices.filter((s) => s.occurrences > 0 && s.hullNote !== undefined);
-  if (noHull.length > 0) {
-    out.push(`  no convex hull for ${noHull.length} slice(s) with occurrences (hull_km2 left empty):`);
-    for (const [note] of countBy(noHull.map((s) => s.hullNote as string))) {
-      const names = noHull.filter((s) => s.hullNote === note).map((s) => s.name);
-      const shown = names.slice(0, LISTED_SLICES).join(', ') + (names.length > LISTED_SLICES ? ` and ${names.length - LISTED_SLICES} more` : '');
-      out.push(`    ${note}: ${shown}`);
-    }
-  }
+  out.push(...cautionLines(result.slices));
   if (result.collectionsArePositions) out.push('  the table names no collections: "collections" counts distinct positions');
   out.push(`wrote ${summary.written.join(', ')}`);
   out.push(`elapsed: ${(summary.elapsedMs / 1000).toFixed(2)} s`);
@@ -51,6 +44,34 @@ function placementLines(result: AnalysisResult, model: RotationModel | undefined
   for (const [reason, count] of countBy(unplaced.map((r) => EXCLUSION_REASONS[r]))) lines.push(`  not placed, ${reason}: ${n(count)}`);
   if (model !== undefined) lines.push(...modelNotes(model));
   return lines;
+}
+
+/**
+ * The slices' cautions (README "Read the numbers with care"), one line per kind of caution with
+ * the number of slices and a few of their names; each slice's numbers are in slices.csv.
+ */
+function cautionLines(slices: ReadonlyArray<SliceNumbers & { readonly name: string }>): string[] {
+  const byKind = new Map<string, string[]>();
+  for (const slice of slices) {
+    for (const caution of sliceCautions(slice)) {
+      const kind = cautionWording(caution);
+      if (kind !== undefined) byKind.set(kind, [...(byKind.get(kind) ?? []), slice.name]);
+    }
+  }
+  return [...byKind].map(([kind, names]) => {
+    const shown = names.slice(0, LISTED_SLICES).join(', ') + (names.length > LISTED_SLICES ? ` and ${names.length - LISTED_SLICES} more` : '');
+    return `  ${names.length} slice(s) ${kind}: ${shown}`;
+  });
+}
+
+/** How the summary words a caution (empty slices are already counted on the slices line). */
+function cautionWording(caution: SliceCaution): string | undefined {
+  switch (caution.code) {
+    case SLICE_CAUTION.noOccurrences: return undefined;
+    case SLICE_CAUTION.fewPlaces: return `with fewer than ${caution.fewerThan} distinct places (every footprint measure is noisy)`;
+    case SLICE_CAUTION.noHull: return `with no convex hull, ${caution.reason} (hull_km2 left empty)`;
+    case SLICE_CAUTION.wideHull: return `with a hull over ${Math.round(100 * caution.above)}% of the sphere, close to a hemisphere (a few outlying places govern its area)`;
+  }
 }
 
 /** What the rotation model accepted but should be told (unused columns, repeated rows). */

@@ -158,6 +158,6 @@ describe('the built command', () => {
     expect(child.stdout).toMatch(/rows read: 49,906; accepted: 49,906; rejected: 0/);
     expect(child.stdout).toMatch(/elapsed: \d+\.\d\d s/);
     // The demo's two widest slices span more than a hemisphere: named, grouped by reason.
-    expect(child.stdout).toMatch(/no convex hull for 2 slice\(s\)[^\n]*\n\s+positions do not fit in an open hemisphere: Campanian, Maastrichtian\n/);
+    expect(child.stdout).toMatch(/\n {2}2 slice\(s\) with no convex hull, positions do not fit in an open hemisphere \(hull_km2 left empty\): Campanian, Maastrichtian\n/);
   });
 });

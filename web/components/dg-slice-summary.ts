@@ -1,17 +1,11 @@
 /**
- * The current slice's numbers (the same as its row of slices.csv) and the cautions that go with
- * them: no hull and why, a hull close to a hemisphere, few positions.
+ * The current slice's numbers (the same as its row of slices.csv) and the cautions the core
+ * decides for them (src/footprint/slice-cautions.ts), worded for the page.
  */
 import { LitElement, css, html, nothing } from 'lit';
 import type { AnalysisView } from '../protocol';
-import { EARTH_RADIUS_KM } from '../../src/sphere';
+import { SLICE_CAUTION, sliceCautions, type SliceCaution } from '../../src/footprint';
 import { panelStyles } from './shared-styles';
-
-/** Below this many distinct positions every footprint measure is noisy (our rule of thumb; README "Read the numbers with care"). */
-const FEW_POSITIONS = 10;
-/** A hull covering more than this share of the sphere is governed by a few outlying sites. */
-const WIDE_HULL_SHARE = 0.35;
-const SPHERE_KM2 = 4 * Math.PI * EARTH_RADIUS_KM ** 2;
 
 const number = (v: number, decimals = 0): string =>
   Number.isFinite(v) ? v.toLocaleString('en', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }) : '—';
@@ -38,13 +32,7 @@ export class DgSliceSummary extends LitElement {
     const s = this.view?.slices[this.slice];
     if (this.view === undefined || s === undefined) return nothing;
     const collections = this.view.collectionsArePositions ? 'Distinct places' : 'Collections';
-    const cautions: string[] = [];
-    if (s.occurrences === 0) cautions.push('No occurrences in this slice.');
-    else if (s.positions < FEW_POSITIONS) cautions.push(`Only ${s.positions} distinct places: every footprint measure is noisy here.`);
-    if (s.hullNote !== undefined && s.occurrences > 0) cautions.push(`No convex hull: ${s.hullNote}.`);
-    if (Number.isFinite(s.hullKm2) && s.hullKm2 > WIDE_HULL_SHARE * SPHERE_KM2) {
-      cautions.push('The hull covers much of a hemisphere: a few outlying sites govern its area; compare with cells and tree length.');
-    }
+    const cautions = sliceCautions(s).map(cautionText);
     return html`
       <h2>Slice ${this.slice + 1} of ${this.view.slices.length}</h2>
       <p><strong data-field="name">${s.name}</strong> <span class="hint">${s.baseMa}–${s.topMa} Ma</span></p>
@@ -58,6 +46,16 @@ export class DgSliceSummary extends LitElement {
         <dt>Latitude span, °</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
       </dl>
       ${cautions.length === 0 ? nothing : html`<ul aria-label="Cautions">${cautions.map((c) => html`<li>${c}</li>`)}</ul>`}`;
+  }
+}
+
+/** The page's wording of a caution. */
+function cautionText(caution: SliceCaution): string {
+  switch (caution.code) {
+    case SLICE_CAUTION.noOccurrences: return 'No occurrences in this slice.';
+    case SLICE_CAUTION.fewPlaces: return `Only ${caution.places} distinct places: every footprint measure is noisy here.`;
+    case SLICE_CAUTION.noHull: return `No convex hull: ${caution.reason}.`;
+    case SLICE_CAUTION.wideHull: return 'The hull covers much of a hemisphere: a few outlying sites govern its area; compare with cells and tree length.';
   }
 }
 
