@@ -1,4 +1,4 @@
-import { convexHull, latitudeStats, minimumSpanningTree, polygonAreaKm2, sphericalCentroid } from '../sphere';
+import { convexHull, degreesToUnitVectors, latitudeStats, minimumSpanningTree, polygonAreaKm2, sphericalCentroid } from '../sphere';
 
 /** Geographic footprint of one slice, measured over its distinct positions. */
 export interface Footprint {
@@ -32,16 +32,18 @@ export function measureFootprint(latDeg: Float64Array, lonDeg: Float64Array): Fo
   return measureFootprintWithShapes(latDeg, lonDeg).footprint;
 }
 
-/** measureFootprint, keeping the hull and tree it measured (so that views need not build them again). */
+/** measureFootprint, keeping the hull and tree it measured (so that views need not build them
+ * again). The positions become unit vectors once, for hull, area, tree and centroid alike. */
 export function measureFootprintWithShapes(latDeg: Float64Array, lonDeg: Float64Array): { footprint: Footprint; shapes: FootprintShapes } {
   const n = latDeg.length;
-  const hull = convexHull(latDeg, lonDeg);
+  const xyz = degreesToUnitVectors(latDeg, lonDeg);
+  const hull = convexHull(xyz);
   const latitude = latitudeStats(latDeg);
-  const centroid = sphericalCentroid(latDeg, lonDeg);
-  const tree = n === 0 ? undefined : minimumSpanningTree(latDeg, lonDeg);
+  const centroid = sphericalCentroid(xyz);
+  const tree = n === 0 ? undefined : minimumSpanningTree(xyz);
   const footprint: Footprint = {
     positions: n,
-    hullKm2: hull.kind === 'hull' ? polygonAreaKm2(latDeg, lonDeg, hull.ring) : NaN,
+    hullKm2: hull.kind === 'hull' ? polygonAreaKm2(xyz, hull.ring) : NaN,
     hullNote: hull.kind === 'hull' || n === 0 ? undefined : hull.reason,
     mstKm: tree === undefined ? NaN : tree.lengthKm,
     latMin: latitude.minDeg,

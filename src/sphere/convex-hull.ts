@@ -5,8 +5,6 @@
  * (Andrew's monotone chain, Andrew 1979, Inf. Process. Lett. 9(5)) is the spherical hull.
  * O(n log n) overall (O(n) expected for the cap, O(n) radix sorting, O(n) chain).
  */
-import { degreesToUnitVectors } from './unit-vectors';
-import { samePosition } from './position-identity';
 import { smallestEnclosingCap } from './smallest-enclosing-cap';
 import { orderByKey } from './radix-order';
 
@@ -30,10 +28,13 @@ export type ConvexHull =
  */
 export const GREAT_CIRCLE_TOLERANCE = 1e-12;
 
-/** Convex hull of the positions (latitude, longitude in degrees) along great circles. */
-export function convexHull(latDeg: Float64Array, lonDeg: Float64Array): ConvexHull {
-  if (!hasThreeDistinct(latDeg, lonDeg)) return none('fewer than three distinct positions');
-  const xyz = degreesToUnitVectors(latDeg, lonDeg);
+/**
+ * Convex hull along great circles of the positions given as unit vectors (interleaved
+ * [x0, y0, z0, x1, …], as from degreesToUnitVectors, which gives equal places bit-identical
+ * vectors).
+ */
+export function convexHull(xyz: Float64Array): ConvexHull {
+  if (!hasThreeDistinct(xyz)) return none('fewer than three distinct positions');
   if (onOneGreatCircle(xyz)) return none('all positions on one great circle');
   const cap = smallestEnclosingCap(xyz);
   if (cap === null) return none('positions do not fit in an open hemisphere');
@@ -46,7 +47,7 @@ export function convexHull(latDeg: Float64Array, lonDeg: Float64Array): ConvexHu
   const e1n = Math.sqrt(e1x * e1x + e1y * e1y + e1z * e1z);
   e1x /= e1n; e1y /= e1n; e1z /= e1n;
   const e2x = cy * e1z - cz * e1y, e2y = cz * e1x - cx * e1z, e2z = cx * e1y - cy * e1x;
-  const n = latDeg.length;
+  const n = xyz.length / 3;
   const gx = new Float64Array(n);
   const gy = new Float64Array(n);
   for (let i = 0; i < n; i++) {
@@ -93,15 +94,19 @@ function turn(xyz: Float64Array, a: number, b: number, c: number): number {
   return ax * (uy * vz - uz * vy) + ay * (uz * vx - ux * vz) + az * (ux * vy - uy * vx);
 }
 
-function hasThreeDistinct(latDeg: Float64Array, lonDeg: Float64Array): boolean {
-  const n = latDeg.length;
+function hasThreeDistinct(xyz: Float64Array): boolean {
+  const n = xyz.length / 3;
   let second = -1;
   for (let i = 1; i < n; i++) {
-    if (samePosition(latDeg[0], lonDeg[0], latDeg[i], lonDeg[i])) continue;
+    if (sameVector(xyz, 0, i)) continue;
     if (second < 0) second = i;
-    else if (!samePosition(latDeg[second], lonDeg[second], latDeg[i], lonDeg[i])) return true;
+    else if (!sameVector(xyz, second, i)) return true;
   }
   return false;
+}
+
+function sameVector(xyz: Float64Array, i: number, j: number): boolean {
+  return xyz[3 * i] === xyz[3 * j] && xyz[3 * i + 1] === xyz[3 * j + 1] && xyz[3 * i + 2] === xyz[3 * j + 2];
 }
 
 /**

@@ -3,7 +3,7 @@ export {
   degreesToUnitVectors, degreesToUnitVectorsInto, writeUnitVector, unitVectorsToDegrees, unitVectorsToDegreesInto,
 } from './unit-vectors';
 export { centralAngle, unitVectorAngle, greatCircleDistanceKm, greatCircleDistancesKmInto } from './distance';
-export { canonicalLatitude, canonicalLongitude, samePosition } from './position-identity';
+export { canonicalLatitude, canonicalLongitude } from './position-identity';
 export { convexHull, HULL_NONE_REASONS, GREAT_CIRCLE_TOLERANCE, type ConvexHull, type HullNoneReason } from './convex-hull';
 export { smallestEnclosingCap, OPEN_HEMISPHERE_MARGIN } from './smallest-enclosing-cap';
 export { polygonAreaSr, polygonAreaKm2 } from './polygon-area';

@@ -9,7 +9,6 @@
  */
 import { EARTH_RADIUS_KM } from './earth';
 import { unitVectorAngle } from './distance';
-import { degreesToUnitVectors } from './unit-vectors';
 import { sphericalDelaunay, type SphericalDelaunay } from './spherical-delaunay';
 import { DisjointSets } from './disjoint-sets';
 import { orderByKey } from './radix-order';
@@ -22,15 +21,15 @@ export interface SpanningTree {
 }
 
 /**
- * Minimum spanning tree of the positions (latitude, longitude in degrees) along great circles.
- * Meant for distinct positions; repeated places are allowed and are joined to their first
- * occurrence by edges of length 0 (listed after the others).
+ * Minimum spanning tree along great circles of the positions given as unit vectors
+ * (interleaved [x0, y0, z0, x1, …]). Meant for distinct positions; repeated places are allowed
+ * and are joined to their first occurrence by edges of length 0 (listed after the others).
  */
-export function minimumSpanningTree(latDeg: Float64Array, lonDeg: Float64Array): SpanningTree {
-  const n = latDeg.length;
+export function minimumSpanningTree(xyz: Float64Array): SpanningTree {
+  const n = xyz.length / 3;
   // Equal places have bit-identical unit vectors (see unit-vectors.ts); the triangulation takes
   // one of them as a vertex and reports the others as repeats.
-  const delaunay = sphericalDelaunay(degreesToUnitVectors(latDeg, lonDeg));
+  const delaunay = sphericalDelaunay(xyz);
   const { vertices, points, repeats } = delaunay;
   const first = vertices.slice(); // the first row at each vertex's place
   for (let k = 0; k < repeats.length; k += 2) first[repeats[k + 1]] = Math.min(first[repeats[k + 1]], repeats[k]);
@@ -75,8 +74,8 @@ function spanningTree(xyz: Float64Array, delaunay: SphericalDelaunay, places: nu
   let m = 0;
   // One pass over the triangles: an edge is settled at the second of its two triangles, once
   // both have marked their longest edge. Written without branches (every candidate slot is
-  // written, and kept by counting it): the tests are unpredictable, and branches on them cost a
-  // fifth more at 5,000 points (measured).
+  // written, and kept by counting it): the tests are unpredictable, so branches on them
+  // mispredict.
   const longest = new Uint8Array(length);
   for (let e = 0; e < length; e += 3) {
     const a = triangles[e], b = triangles[e + 1], c = triangles[e + 2];

@@ -124,7 +124,7 @@ const ORIENT_BOUND = (3 + 16 * 2 ** -53) * 2 ** -53;
  * orient2d(a, b, c), as robust-predicates computes it: the plain determinant when its first
  * error bound certifies the sign (Shewchuk 1997, Discrete Comput. Geom. 18(3)), else the exact
  * predicate. Checked here first, the bound spares the walk, which tests most, a call and two
- * branches per test (about 5% of the whole minimum spanning tree, measured).
+ * branches per test.
  */
 function side(ax: number, ay: number, bx: number, by: number, cx: number, cy: number): number {
   const left = (ay - cy) * (bx - cx), right = (ax - cx) * (by - cy);

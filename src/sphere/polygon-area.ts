@@ -6,29 +6,27 @@
  * triangle smaller than a hemisphere and needs no trigonometry on the sides.
  */
 import { EARTH_RADIUS_KM } from './earth';
-import { writeUnitVector } from './unit-vectors';
 
 /**
- * Signed area in steradians of the ring of positions (degrees) in the order given, or in the
- * order of `ring` (row indices) when given; the ring is closed implicitly (a repeated first
+ * Signed area in steradians of the ring of positions, given as unit vectors (interleaved
+ * [x0, y0, z0, x1, …]), in the order given, or in the order of `ring` (vector indices) when given; the ring is closed implicitly (a repeated first
  * vertex at the end adds nothing). Positive when counter-clockwise seen from outside (RFC 7946
  * exterior order). The result lies in (−2π, 2π]: a ring holding more than a hemisphere on its
  * left comes out as minus the area of the other side, as in GeographicLib's signed polygon area.
  */
-export function polygonAreaSr(latDeg: Float64Array, lonDeg: Float64Array, ring?: Uint32Array): number {
-  const n = ring === undefined ? latDeg.length : ring.length;
+export function polygonAreaSr(xyz: Float64Array, ring?: Uint32Array): number {
+  const n = ring === undefined ? xyz.length / 3 : ring.length;
   if (n < 3) return 0;
-  const v = new Float64Array(9); // a, b, c
-  const row = (k: number) => (ring === undefined ? k : ring[k]);
-  writeUnitVector(latDeg[row(0)], lonDeg[row(0)], v, 0);
-  writeUnitVector(latDeg[row(1)], lonDeg[row(1)], v, 3);
-  const ax = v[0], ay = v[1], az = v[2];
+  const at = (k: number) => 3 * (ring === undefined ? k : ring[k]);
+  const a = at(0);
+  const ax = xyz[a], ay = xyz[a + 1], az = xyz[a + 2];
+  let b = at(1);
   // Neumaier's compensated sum (Neumaier 1974, ZAMM 54): small triangles lose nothing beside big ones.
   let sum = 0;
   let compensation = 0;
   for (let k = 2; k < n; k++) {
-    writeUnitVector(latDeg[row(k)], lonDeg[row(k)], v, 6);
-    const bx = v[3], by = v[4], bz = v[5], cx = v[6], cy = v[7], cz = v[8];
+    const c = at(k);
+    const bx = xyz[b], by = xyz[b + 1], bz = xyz[b + 2], cx = xyz[c], cy = xyz[c + 1], cz = xyz[c + 2];
     // a·(b × c) = a·((b − a) × (c − a)): the differences keep precision in small triangles.
     const ux = bx - ax, uy = by - ay, uz = bz - az;
     const wx = cx - ax, wy = cy - ay, wz = cz - az;
@@ -38,7 +36,7 @@ export function polygonAreaSr(latDeg: Float64Array, lonDeg: Float64Array, ring?:
     const t = sum + term;
     compensation += Math.abs(sum) >= Math.abs(term) ? sum - t + term : term - t + sum;
     sum = t;
-    v[3] = cx; v[4] = cy; v[5] = cz;
+    b = c;
   }
   // Fold into (−2π, 2π]: the fan gives the area only modulo 4π for rings past a hemisphere.
   const area = (sum + compensation) % (4 * Math.PI);
@@ -48,6 +46,6 @@ export function polygonAreaSr(latDeg: Float64Array, lonDeg: Float64Array, ring?:
 }
 
 /** Signed area in km² on the mean Earth sphere; see `polygonAreaSr`. */
-export function polygonAreaKm2(latDeg: Float64Array, lonDeg: Float64Array, ring?: Uint32Array): number {
-  return polygonAreaSr(latDeg, lonDeg, ring) * EARTH_RADIUS_KM * EARTH_RADIUS_KM;
+export function polygonAreaKm2(xyz: Float64Array, ring?: Uint32Array): number {
+  return polygonAreaSr(xyz, ring) * EARTH_RADIUS_KM * EARTH_RADIUS_KM;
 }

@@ -1,7 +1,7 @@
 /**
  * Stable orderings of indices by numeric keys with least-significant-digit radix sorts: O(n), no
  * comparator calls, no pathological inputs. The digit width suits the number of keys (moving a
- * key costs about as much as clearing and summing eight buckets, measured), one counting pass
+ * key costs about as much as clearing and summing a few buckets), one counting pass
  * finds the histograms of all digits, and a digit that all keys share costs no pass. Short
  * ranges are sorted by insertion instead, cheaper than clearing histograms.
  */

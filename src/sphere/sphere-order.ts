@@ -2,9 +2,8 @@
  * An insertion order of points on the sphere for incremental triangulation, in two rounds after
  * Amenta, Choi & Rote's biased randomized insertion order (2003, Proc. 19th SoCG): first a random
  * sixteenth of the points, then the rest. The first round spans a coarse triangulation, so that
- * later points seldom fall at the edge of what is built, where an insertion flips the most (about
- * a quarter fewer flips than one round, measured). Within a round the order is that of the Morton
- * (Z-order) curve (Morton 1966) through a grid over the points' bounding box in 3-D, with about
+ * later points seldom fall at the edge of what is built, where an insertion flips the most.
+ * Within a round the order is that of the Morton (Z-order) curve (Morton 1966) through a grid over the points' bounding box in 3-D, with about
  * one cell per point where the points lie: consecutive points are mostly close, so each
  * point-location walk is short. Working on the unit vectors rather than on a plane projection
  * keeps the grid even however the projection stretches distances. (A Hilbert curve, tried too,

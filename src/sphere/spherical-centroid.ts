@@ -3,7 +3,6 @@
  * direction of directional statistics; Mardia & Jupp 2000, Directional Statistics, §9.2).
  */
 import { DEGREES } from './earth';
-import { writeUnitVector } from './unit-vectors';
 
 /**
  * Below this mean resultant length the mean vector is indistinguishable from zero (rounding in
@@ -23,16 +22,14 @@ export interface SphericalCentroid {
   readonly defined: boolean;
 }
 
-/** Spherical centroid of the positions (latitude, longitude in degrees). */
-export function sphericalCentroid(latDeg: Float64Array, lonDeg: Float64Array): SphericalCentroid {
-  const n = latDeg.length;
-  const v = new Float64Array(3);
+/** Spherical centroid of the positions given as unit vectors (interleaved [x0, y0, z0, x1, …]). */
+export function sphericalCentroid(xyz: Float64Array): SphericalCentroid {
+  const n = xyz.length / 3;
   let sx = 0, sy = 0, sz = 0;
-  for (let i = 0; i < n; i++) {
-    writeUnitVector(latDeg[i], lonDeg[i], v, 0);
-    sx += v[0];
-    sy += v[1];
-    sz += v[2];
+  for (let o = 0; o < xyz.length; o += 3) {
+    sx += xyz[o];
+    sy += xyz[o + 1];
+    sz += xyz[o + 2];
   }
   const length = n === 0 ? 0 : Math.sqrt(sx * sx + sy * sy + sz * sz) / n;
   if (!(length >= CENTROID_UNDEFINED_BELOW)) {

@@ -88,25 +88,25 @@ export async function run(): Promise<void> {
   // pipeline measures about a hundred slices in a row: warm-up enough for steady figures.
   const slice = positions(6, 1_500);
   report(
-    time('minimumSpanningTree, 1,500 positions', () => minimumSpanningTree(slice.lat, slice.lon), 100, 20),
+    time('minimumSpanningTree, 1,500 positions', () => minimumSpanningTree(degreesToUnitVectors(slice.lat, slice.lon)), 100, 20),
     time('reference: Prim O(n²), 1,500 positions', () => primLengthKm(slice.lat, slice.lon), 5, 1),
   );
   const small = positions(1, 5_000);
-  const ours5k = time('minimumSpanningTree, 5,000 positions', () => minimumSpanningTree(small.lat, small.lon), 30, 5);
+  const ours5k = time('minimumSpanningTree, 5,000 positions', () => minimumSpanningTree(degreesToUnitVectors(small.lat, small.lon)), 30, 5);
   const prim5k = time('reference: Prim O(n²), 5,000 positions', () => primLengthKm(small.lat, small.lon), 3, 1);
   report(ours5k, prim5k);
-  const check = Math.abs(minimumSpanningTree(small.lat, small.lon).lengthKm - primLengthKm(small.lat, small.lon));
+  const check = Math.abs(minimumSpanningTree(degreesToUnitVectors(small.lat, small.lon)).lengthKm - primLengthKm(small.lat, small.lon));
   console.log(`${''.padEnd(48)} length difference from Prim: ${check.toExponential(1)} km`);
 
   const large = positions(2, 100_000);
-  report(time('minimumSpanningTree, 100,000 positions', () => minimumSpanningTree(large.lat, large.lon), 5, 1), undefined, '< 1000 ms');
+  report(time('minimumSpanningTree, 100,000 positions', () => minimumSpanningTree(degreesToUnitVectors(large.lat, large.lon)), 5, 1), undefined, '< 1000 ms');
 
   const footprint = positions(3, 100_000, 60, 20);
   report(
-    time('convexHull, 100,000 positions in a 60° cap', () => convexHull(footprint.lat, footprint.lon), 10, 2),
+    time('convexHull, 100,000 positions in a 60° cap', () => convexHull(degreesToUnitVectors(footprint.lat, footprint.lon)), 10, 2),
     time('reference: gift wrapping O(n·h), same', () => jarvisHullSize(footprint.lat, footprint.lon), 3, 1),
   );
-  report(time('convexHull, 100,000 positions over the globe', () => convexHull(large.lat, large.lon), 10, 2));
+  report(time('convexHull, 100,000 positions over the globe', () => convexHull(degreesToUnitVectors(large.lat, large.lon)), 10, 2));
 
   const rows = Uint32Array.from({ length: 1_000_000 }, (_, i) => i);
   const million = positions(4, 1_000_000);

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { FEW_PLACES_BELOW, SLICE_CAUTION, WIDE_HULL_SHARE, sliceCautions } from '../../src/footprint/slice-cautions';
+import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { polygonAreaKm2 } from '../../src/sphere/polygon-area';
 
 const R_KM = 6371.0088;
@@ -34,7 +35,7 @@ describe('slice cautions', () => {
     expect(wide).toEqual([{ code: SLICE_CAUTION.wideHull, sphereShare: expect.closeTo((1 - Math.cos((edgeDeg + 0.1) * RAD)) / 2, 12), above: WIDE_HULL_SHARE }]);
     // Four places just north of the equator, a quarter turn apart: nearly the northern hemisphere.
     const lat = Float64Array.of(1, 1, 1, 1), lon = Float64Array.of(-180, -90, 0, 90);
-    expect(codes(slice(100, polygonAreaKm2(lat, lon)))).toEqual([SLICE_CAUTION.wideHull]);
+    expect(codes(slice(100, polygonAreaKm2(degreesToUnitVectors(lat, lon))))).toEqual([SLICE_CAUTION.wideHull]);
   });
 
   it('says only that an empty slice is empty', () => {

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import { geoContains } from 'd3-geo';
 import { geoDelaunay } from 'd3-geo-voronoi';
 import geodesic from 'geographiclib-geodesic';
+import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { convexHull, type ConvexHull } from '../../src/sphere/convex-hull';
 import { polygonAreaKm2 } from '../../src/sphere/polygon-area';
 import { EARTH_RADIUS_KM } from '../../src/sphere/earth';
@@ -66,7 +67,7 @@ describe('convex hull', () => {
       fc.double({ min: -180, max: 180, noNaN: true }), fc.double({ min: 0.001, max: 85, noNaN: true }),
       (seed, n, cLat, cLon, radius) => {
         const { lat, lon } = capSample(seed, n, cLat, cLon, radius);
-        expectValidHull(lat, lon, ringOf(convexHull(lat, lon)));
+        expectValidHull(lat, lon, ringOf(convexHull(degreesToUnitVectors(lat, lon))));
       },
     ), { numRuns: 200, seed: 61 });
   });
@@ -76,7 +77,7 @@ describe('convex hull', () => {
   it('has the same vertices as d3-geo-voronoi’s hull, in the opposite order', () => {
     for (const [seed, cLat, cLon, radius] of [[1, 10, 170, 40], [2, -60, -30, 25], [3, 85, 0, 30], [4, 0, 0, 0.01]]) {
       const { lat, lon } = capSample(seed, 200, cLat, cLon, radius);
-      const ours = Array.from(ringOf(convexHull(lat, lon)));
+      const ours = Array.from(ringOf(convexHull(degreesToUnitVectors(lat, lon))));
       const theirs = geoDelaunay(Array.from(lat, (_, i): [number, number] => [lon[i], lat[i]])).hull;
       expect(new Set(ours)).toEqual(new Set(theirs));
       const start = theirs.indexOf(ours[0]);
@@ -90,18 +91,18 @@ describe('convex hull', () => {
     const sphere = new geodesic.Geodesic.Geodesic(EARTH_RADIUS_KM * 1000, 0);
     for (const [seed, cLat, cLon, radius] of [[5, 30, -179, 60], [6, -89, 40, 20], [7, 45, 7, 0.5], [8, 0, 90, 84]]) {
       const { lat, lon } = capSample(seed, 500, cLat, cLon, radius);
-      const ring = ringOf(convexHull(lat, lon));
+      const ring = ringOf(convexHull(degreesToUnitVectors(lat, lon)));
       const polygon = sphere.Polygon(false);
       for (const r of ring) polygon.AddPoint(lat[r], lon[r]);
       const reference = polygon.Compute(false, true).area! / 1e6;
       expect(reference).toBeGreaterThan(0);
-      expect(Math.abs(polygonAreaKm2(lat, lon, ring) - reference)).toBeLessThanOrEqual(1e-9 * reference);
+      expect(Math.abs(polygonAreaKm2(degreesToUnitVectors(lat, lon), ring) - reference)).toBeLessThanOrEqual(1e-9 * reference);
     }
   });
 
   it('surrounds the pole for points all around it', () => {
     const lat = Float64Array.of(80, 75, 82, 78, 85), lon = Float64Array.of(0, 72, 144, -144, -72);
-    const ring = ringOf(convexHull(lat, lon));
+    const ring = ringOf(convexHull(degreesToUnitVectors(lat, lon)));
     expectValidHull(lat, lon, ring);
     const polygon = { type: 'Polygon' as const, coordinates: [[...ring, ring[0]].reverse().map((r) => [lon[r], lat[r]])] };
     expect(geoContains(polygon, [0, 90])).toBe(true);
@@ -110,7 +111,7 @@ describe('convex hull', () => {
   it('leaves out repeated points and points on an edge, and works across the antimeridian', () => {
     const lat = Float64Array.of(-10, -10, 10, 10, 0, -10, 0, 0);
     const lon = Float64Array.of(170, -170, -170, 170, 180, 170, -180, 175);
-    const ring = Array.from(ringOf(convexHull(lat, lon)));
+    const ring = Array.from(ringOf(convexHull(degreesToUnitVectors(lat, lon))));
     expect(ring.length).toBe(4);
     expect(new Set(ring)).toEqual(new Set([0, 1, 2, 3]));
     expectValidHull(lat, lon, Uint32Array.from(ring));
@@ -119,38 +120,38 @@ describe('convex hull', () => {
   it('exists for points that just fit in a hemisphere: within 89° of the north pole all around', () => {
     const { lat, lon } = capSample(9, 3000, 90, 0, 89);
     lat[0] = 1; lon[0] = 0; lat[1] = 1; lon[1] = 120; lat[2] = 1; lon[2] = -120;
-    const ring = ringOf(convexHull(lat, lon));
+    const ring = ringOf(convexHull(degreesToUnitVectors(lat, lon)));
     expectValidHull(lat, lon, ring);
   });
 
   it('does not exist for points reaching 1° south of the equator all around', () => {
     const { lat, lon } = capSample(10, 3000, 90, 0, 89);
     lat[0] = -1; lon[0] = 0; lat[1] = -1; lon[1] = 120; lat[2] = -1; lon[2] = -120;
-    expect(convexHull(lat, lon)).toEqual({ kind: 'none', reason: 'positions do not fit in an open hemisphere' });
+    expect(convexHull(degreesToUnitVectors(lat, lon))).toEqual({ kind: 'none', reason: 'positions do not fit in an open hemisphere' });
   });
 
   it('does not exist for points spread over the whole globe, nor for points on a closed hemisphere’s rim', () => {
     const { lat, lon } = capSample(11, 10_000, 0, 0, 180);
-    expect(convexHull(lat, lon)).toEqual({ kind: 'none', reason: 'positions do not fit in an open hemisphere' });
-    const rim = convexHull(Float64Array.of(0, 0, 0, 45), Float64Array.of(0, 120, -120, 0));
+    expect(convexHull(degreesToUnitVectors(lat, lon))).toEqual({ kind: 'none', reason: 'positions do not fit in an open hemisphere' });
+    const rim = convexHull(degreesToUnitVectors(Float64Array.of(0, 0, 0, 45), Float64Array.of(0, 120, -120, 0)));
     expect(rim).toEqual({ kind: 'none', reason: 'positions do not fit in an open hemisphere' });
   });
 
   it('does not exist for fewer than three distinct places, counting ±180° and any longitude at a pole as one', () => {
     const reason = { kind: 'none', reason: 'fewer than three distinct positions' };
-    expect(convexHull(new Float64Array(0), new Float64Array(0))).toEqual(reason);
-    expect(convexHull(Float64Array.of(5), Float64Array.of(5))).toEqual(reason);
-    expect(convexHull(Float64Array.of(5, 5, 5, 5), Float64Array.of(-180, 180, -180, 180))).toEqual(reason);
-    expect(convexHull(Float64Array.of(90, 90, 20, 90), Float64Array.of(0, 45, 3, -170))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(new Float64Array(0), new Float64Array(0)))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(Float64Array.of(5), Float64Array.of(5)))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(Float64Array.of(5, 5, 5, 5), Float64Array.of(-180, 180, -180, 180)))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(Float64Array.of(90, 90, 20, 90), Float64Array.of(0, 45, 3, -170)))).toEqual(reason);
   });
 
   it('does not exist for points on one great circle: the equator, a meridian, or a tilted circle', () => {
     const reason = { kind: 'none', reason: 'all positions on one great circle' };
-    expect(convexHull(Float64Array.of(0, 0, 0, 0), Float64Array.of(10, 20, 35, 50))).toEqual(reason);
-    expect(convexHull(Float64Array.of(-30, 10, 60, 89), Float64Array.of(40, 40, 40, 40))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(Float64Array.of(0, 0, 0, 0), Float64Array.of(10, 20, 35, 50)))).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(Float64Array.of(-30, 10, 60, 89), Float64Array.of(40, 40, 40, 40)))).toEqual(reason);
     // Points of the great circle through (0°, 0°) and (45°N, 90°E): lat = atan(sin λ), any λ.
     const lon = Float64Array.of(-60, -10, 0, 33, 80);
     const lat = lon.map((l) => Math.atan(Math.sin(l * RAD)) / RAD);
-    expect(convexHull(lat, lon)).toEqual(reason);
+    expect(convexHull(degreesToUnitVectors(lat, lon))).toEqual(reason);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import geodesic from 'geographiclib-geodesic';
+import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { minimumSpanningTree } from '../../src/sphere/minimum-spanning-tree';
 import { EARTH_RADIUS_KM } from '../../src/sphere/earth';
 
@@ -45,7 +46,7 @@ function expectSpanningTree(lat: Float64Array, lon: Float64Array, tree: { length
 }
 
 function expectMinimal(lat: Float64Array, lon: Float64Array): void {
-  const tree = minimumSpanningTree(lat, lon);
+  const tree = minimumSpanningTree(degreesToUnitVectors(lat, lon));
   expectSpanningTree(lat, lon, tree);
   const reference = primLengthKm(lat, lon);
   expect(Math.abs(tree.lengthKm - reference)).toBeLessThanOrEqual(1e-9 * reference + 1e-9);
@@ -84,18 +85,18 @@ describe('minimum spanning tree', () => {
   }
 
   it('handles no position, one position, and two positions (antipodal ones too)', () => {
-    expect(minimumSpanningTree(new Float64Array(0), new Float64Array(0))).toEqual({ lengthKm: 0, edges: new Uint32Array(0) });
-    expect(minimumSpanningTree(Float64Array.of(3), Float64Array.of(4))).toEqual({ lengthKm: 0, edges: new Uint32Array(0) });
-    const two = minimumSpanningTree(Float64Array.of(0, 0), Float64Array.of(0, 90));
+    expect(minimumSpanningTree(degreesToUnitVectors(new Float64Array(0), new Float64Array(0)))).toEqual({ lengthKm: 0, edges: new Uint32Array(0) });
+    expect(minimumSpanningTree(degreesToUnitVectors(Float64Array.of(3), Float64Array.of(4)))).toEqual({ lengthKm: 0, edges: new Uint32Array(0) });
+    const two = minimumSpanningTree(degreesToUnitVectors(Float64Array.of(0, 0), Float64Array.of(0, 90)));
     expect(Array.from(two.edges)).toEqual([0, 1]);
     expect(two.lengthKm).toBeCloseTo((Math.PI / 2) * EARTH_RADIUS_KM, 9);
-    expect(minimumSpanningTree(Float64Array.of(30, -30), Float64Array.of(10, -170)).lengthKm).toBeCloseTo(Math.PI * EARTH_RADIUS_KM, 9);
+    expect(minimumSpanningTree(degreesToUnitVectors(Float64Array.of(30, -30), Float64Array.of(10, -170))).lengthKm).toBeCloseTo(Math.PI * EARTH_RADIUS_KM, 9);
   });
 
   it('joins repeated places by zero-length edges, ±180° and any longitude at a pole being one place', () => {
     const lat = Float64Array.of(5, 5, 90, 90, 5);
     const lon = Float64Array.of(-180, 180, 0, 77, -180);
-    const tree = minimumSpanningTree(lat, lon);
+    const tree = minimumSpanningTree(degreesToUnitVectors(lat, lon));
     expectSpanningTree(lat, lon, tree);
     expect(tree.lengthKm).toBeCloseTo(85 * (Math.PI / 180) * EARTH_RADIUS_KM, 9);
   });

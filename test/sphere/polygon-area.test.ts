@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import geodesic from 'geographiclib-geodesic';
+import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { polygonAreaKm2, polygonAreaSr } from '../../src/sphere/polygon-area';
 import { EARTH_RADIUS_KM } from '../../src/sphere/earth';
 
@@ -32,12 +33,12 @@ function starPolygon(centreLat: number, centreLon: number, radii: number[], bear
 describe('polygon area', () => {
   it('gives an octant of the sphere, 4πR²/8, for the triangle between the equator, 90°E and the pole (closed form)', () => {
     const lat = Float64Array.of(0, 0, 90), lon = Float64Array.of(0, 90, 0);
-    expect(polygonAreaSr(lat, lon)).toBeCloseTo(Math.PI / 2, 14);
-    expect(polygonAreaKm2(lat, lon) / ((4 * Math.PI * R2) / 8)).toBeCloseTo(1, 14);
+    expect(polygonAreaSr(degreesToUnitVectors(lat, lon))).toBeCloseTo(Math.PI / 2, 14);
+    expect(polygonAreaKm2(degreesToUnitVectors(lat, lon)) / ((4 * Math.PI * R2) / 8)).toBeCloseTo(1, 14);
   });
 
   it('is negative for a clockwise ring', () => {
-    expect(polygonAreaSr(Float64Array.of(90, 0, 0), Float64Array.of(0, 90, 0))).toBeCloseTo(-Math.PI / 2, 14);
+    expect(polygonAreaSr(degreesToUnitVectors(Float64Array.of(90, 0, 0), Float64Array.of(0, 90, 0)))).toBeCloseTo(-Math.PI / 2, 14);
   });
 
   // Worked example, L'Huilier's theorem (e.g. Todhunter 1886, Spherical Trigonometry, Art. 102):
@@ -48,7 +49,7 @@ describe('polygon area', () => {
   // C it is arctan(tan 60° / sin 60°) = arctan 2 = 63.4349° (Napier's rules), so
   // E = 90° + 2 × 63.4349° − 180° = 36.8699°; indeed E = arctan(3/4).
   it('matches a triangle worked by L’Huilier’s theorem and by Girard’s theorem', () => {
-    expect(polygonAreaSr(Float64Array.of(0, 0, 60), Float64Array.of(0, 60, 0))).toBeCloseTo(Math.atan(3 / 4), 14);
+    expect(polygonAreaSr(degreesToUnitVectors(Float64Array.of(0, 0, 60), Float64Array.of(0, 60, 0)))).toBeCloseTo(Math.atan(3 / 4), 14);
   });
 
   // A regular N-gon inscribed in the circle of angular radius θ about the pole is N isosceles
@@ -64,7 +65,7 @@ describe('polygon area', () => {
     const alpha = (2 * Math.PI) / sides;
     const lat = new Float64Array(sides).fill(90 - thetaDeg);
     const lon = Float64Array.from({ length: sides }, (_, k) => -180 + (360 * k) / sides);
-    const area = polygonAreaSr(lat, lon);
+    const area = polygonAreaSr(degreesToUnitVectors(lat, lon));
     const t2 = Math.tan(theta / 2) ** 2;
     const exact = sides * 2 * Math.atan2(t2 * Math.sin(alpha), 1 + t2 * Math.cos(alpha));
     expect(Math.abs(area - exact)).toBeLessThanOrEqual(1e-12 * exact + 1e-18);
@@ -84,7 +85,7 @@ describe('polygon area', () => {
       const radii = Array.from({ length: n }, () => km * (0.3 + 0.7 * next()));
       const bearings = Array.from({ length: n }, (_, k) => ((k + 0.8 * next()) * 360) / n - 180);
       const ring = starPolygon(cLat, cLon, radii, bearings);
-      const ours = polygonAreaKm2(ring.lat, ring.lon);
+      const ours = polygonAreaKm2(degreesToUnitVectors(ring.lat, ring.lon));
       const reference = referenceKm2(ring.lat, ring.lon);
       expect(ours).toBeGreaterThan(0);
       // Agreement to 1e-9 relative, plus 1e-10 km² for the metre-sized ones, where GeographicLib's
@@ -115,7 +116,7 @@ describe('polygon area', () => {
         twice += xk * yj - xj * yk;
       }
       const planar = twice / 2; // x east, y north: the vertices at decreasing bearings run counter-clockwise
-      expect(Math.abs(polygonAreaKm2(ring.lat, ring.lon) - planar)).toBeLessThanOrEqual(1e-8 * planar);
+      expect(Math.abs(polygonAreaKm2(degreesToUnitVectors(ring.lat, ring.lon)) - planar)).toBeLessThanOrEqual(1e-8 * planar);
     }), { numRuns: 300, seed: 43 });
   });
 
@@ -126,7 +127,7 @@ describe('polygon area', () => {
       { lat: [-10, -10, 10, 10], lon: [170, -170, -170, 170] },
     ];
     for (const r of rings) {
-      const ours = polygonAreaKm2(Float64Array.from(r.lat), Float64Array.from(r.lon));
+      const ours = polygonAreaKm2(degreesToUnitVectors(Float64Array.from(r.lat), Float64Array.from(r.lon)));
       const reference = referenceKm2(r.lat, r.lon);
       expect(Math.abs(ours - reference)).toBeLessThanOrEqual(1e-9 * Math.abs(reference));
     }
@@ -136,7 +137,7 @@ describe('polygon area', () => {
     // The equator-ward ring at 30°S traversed eastward holds everything north of it on its left.
     const lat = new Float64Array(36).fill(-30);
     const lon = Float64Array.from({ length: 36 }, (_, k) => -180 + 10 * k);
-    const ours = polygonAreaKm2(lat, lon);
+    const ours = polygonAreaKm2(degreesToUnitVectors(lat, lon));
     expect(ours).toBeLessThan(0);
     expect(Math.abs(ours - referenceKm2(lat, lon))).toBeLessThanOrEqual(1e-9 * Math.abs(ours));
   });
@@ -146,19 +147,19 @@ describe('polygon area', () => {
       const lat = Float64Array.from({ length: n }, (_, k) => 20 + radiusDeg * Math.sin((2 * Math.PI * k) / n) * (1 + (k % 3) / 10));
       const lon = Float64Array.from({ length: n }, (_, k) => 175 + radiusDeg * Math.cos((2 * Math.PI * k) / n));
       const ring = Uint32Array.from({ length: n }, (_, k) => (k + shift) % n);
-      const a = polygonAreaSr(lat, lon);
-      expect(Math.abs(polygonAreaSr(lat, lon, ring) - a)).toBeLessThanOrEqual(1e-14 * Math.abs(a) + 1e-20);
+      const a = polygonAreaSr(degreesToUnitVectors(lat, lon));
+      expect(Math.abs(polygonAreaSr(degreesToUnitVectors(lat, lon), ring) - a)).toBeLessThanOrEqual(1e-14 * Math.abs(a) + 1e-20);
     }), { numRuns: 300, seed: 42 });
   });
 
   it('changes sign and nothing else when the ring is reversed, and ignores a repeated closing vertex', () => {
     const lat = Float64Array.of(-5, -4, 3, 6, 1), lon = Float64Array.of(10, 22, 25, 14, 8);
-    const a = polygonAreaSr(lat, lon);
-    expect(polygonAreaSr(lat, lon, Uint32Array.of(4, 3, 2, 1, 0))).toBeCloseTo(-a, 15);
-    expect(polygonAreaSr(lat, lon, Uint32Array.of(0, 1, 2, 3, 4, 0))).toBeCloseTo(a, 15);
+    const a = polygonAreaSr(degreesToUnitVectors(lat, lon));
+    expect(polygonAreaSr(degreesToUnitVectors(lat, lon), Uint32Array.of(4, 3, 2, 1, 0))).toBeCloseTo(-a, 15);
+    expect(polygonAreaSr(degreesToUnitVectors(lat, lon), Uint32Array.of(0, 1, 2, 3, 4, 0))).toBeCloseTo(a, 15);
   });
 
   it('is zero for fewer than three vertices', () => {
-    expect(polygonAreaSr(Float64Array.of(1, 2), Float64Array.of(1, 2))).toBe(0);
+    expect(polygonAreaSr(degreesToUnitVectors(Float64Array.of(1, 2), Float64Array.of(1, 2)))).toBe(0);
   });
 });

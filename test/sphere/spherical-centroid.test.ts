@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { geoCentroid } from 'd3-geo';
+import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { CENTROID_UNDEFINED_BELOW, sphericalCentroid } from '../../src/sphere/spherical-centroid';
 
-const of = (...pos: [number, number][]) => sphericalCentroid(Float64Array.from(pos, (p) => p[0]), Float64Array.from(pos, (p) => p[1]));
+const of = (...pos: [number, number][]) => sphericalCentroid(degreesToUnitVectors(Float64Array.from(pos, (p) => p[0]), Float64Array.from(pos, (p) => p[1])));
 
 describe('spherical centroid', () => {
   // Worked by hand: unit vectors (1, 0, 0) and (0, 1, 0); mean (½, ½, 0), length √2/2 = 0.7071;

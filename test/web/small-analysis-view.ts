@@ -6,7 +6,7 @@ import type { Feature, FeatureCollection, Position } from 'geojson';
 import type { SliceMetrics } from '../../src/analysis';
 import { measureFootprint } from '../../src/footprint/slice-footprint';
 import { parseGridName } from '../../src/grid';
-import { appendGreatCircleArc, convexHull, minimumSpanningTree } from '../../src/sphere';
+import { appendGreatCircleArc, convexHull, degreesToUnitVectors, minimumSpanningTree } from '../../src/sphere';
 import { createSeededRandom } from '../../src/time';
 import { DEFAULT_SETTINGS, type AnalysisView, type PathSet } from '../../web/protocol';
 
@@ -80,9 +80,9 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
     }
     placeStart.push(placeLat.length);
     if (spec.withPaths ?? true) {
-      const hull = convexHull(lat, lon);
+      const hull = convexHull(degreesToUnitVectors(lat, lon));
       if (hull.kind === 'hull') hulls.add(lat, lon, hull.ring, true);
-      const { edges } = minimumSpanningTree(lat, lon);
+      const { edges } = minimumSpanningTree(degreesToUnitVectors(lat, lon));
       for (let e = 0; e < edges.length; e += 2) trees.add(lat, lon, [edges[e], edges[e + 1]], false);
     }
     hulls.endSlice();
