@@ -32,9 +32,6 @@ export interface ReconstructedPoints {
 /** Rows per chunk: working arrays of 1024 rows fit in the first-level cache. */
 const CHUNK = 1024;
 
-// Module-local copies of the status codes read per row (see rotation-kernels.ts on why).
-const { clamped: CLAMPED, noPlateId: NO_PLATE_ID, noPosition: NO_POSITION, noAge: NO_AGE } = ROTATION_STATUS;
-
 /**
  * Rotates each row's present-day position by the total rotation of its plate at its age —
  * `ages` per row, or one age for all (Ma) — into `out`, and sets each row's status. A row is
@@ -84,9 +81,9 @@ function groupChunk(
     const plate = plateId[i], la = lat[i], lo = lon[i];
     const age = typeof ages === 'number' ? ages : ages[i];
     let status: number, g = -1;
-    if (plate < 0) status = NO_PLATE_ID;
-    else if (!(la >= -90 && la <= 90 && lo >= -180 && lo <= 180)) status = NO_POSITION;
-    else if (!(age >= 0)) status = NO_AGE;
+    if (plate < 0) status = ROTATION_STATUS.noPlateId;
+    else if (!(la >= -90 && la <= 90 && lo >= -180 && lo <= 180)) status = ROTATION_STATUS.noPosition;
+    else if (!(age >= 0)) status = ROTATION_STATUS.noAge;
     else {
       const known = groups.count;
       g = groups.groupOf(plate, age);
@@ -94,7 +91,7 @@ function groupChunk(
       status = work.groupStatus[g];
     }
     outStatus[i] = status;
-    rowGroup[j] = status <= CLAMPED ? g : -1;
+    rowGroup[j] = status <= ROTATION_STATUS.clamped ? g : -1;
   }
 }
 
@@ -107,7 +104,7 @@ function resolveGroup(model: RotationModel, g: number, plate: number, age: numbe
     work.groupStatus = s;
   }
   work.groupStatus[g] = model.tryUncachedRotationAt(plate, age, work.rotation);
-  if (work.groupStatus[g] <= CLAMPED) rotationMatrixFromQuaternionInto(work.rotation, work.matrices, 9 * g);
+  if (work.groupStatus[g] <= ROTATION_STATUS.clamped) rotationMatrixFromQuaternionInto(work.rotation, work.matrices, 9 * g);
 }
 
 /** `reconstructPointsInto` with new output columns. */

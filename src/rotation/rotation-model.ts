@@ -48,7 +48,6 @@ export class RotationModel {
   private readonly reach: ReadonlyMap<number, PlateReach>;
   private readonly cache = new Map<number, Map<number, Quaternion>>();
   private cached = 0;
-  private readonly step = createQuaternion();
 
   constructor(table: PoleTable, options: RotationModelOptions = {}) {
     const notes = [...table.notes];
@@ -157,16 +156,12 @@ export class RotationModel {
     return total;
   }
 
-  /** Composes the chain at an age its every link reaches, from the plate up: each parent's
-   * relative rotation is applied after what is composed so far (this order of the rounding
-   * is the one the committed demo files were generated with). */
+  /** total(P, t) = total(parent(P, t), t) ∘ relative(P, t) (see above), at an age every link
+   * of the chain reaches. */
   private totalInto(plateId: number, ageMa: number, out: Quaternion): Quaternion {
-    let parent = this.relativeInto(this.plates.get(plateId)!, ageMa, out);
-    while (parent !== this.fixedPlate) {
-      parent = this.relativeInto(this.plates.get(parent)!, ageMa, this.step);
-      multiplyQuaternionsInto(this.step, out, out);
-    }
-    return out;
+    const parent = this.relativeInto(this.plates.get(plateId)!, ageMa, out);
+    if (parent === this.fixedPlate) return out;
+    return multiplyQuaternionsInto(this.totalInto(parent, ageMa, createQuaternion()), out, out);
   }
 
   /** Writes the rotation of `p` relative to its parent at `ageMa` and returns the parent. */

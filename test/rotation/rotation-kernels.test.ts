@@ -1,58 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { atan2Fast, degreesOfRowsInto, rotateRowsInto, writeUnitVectorFast } from '../../src/rotation/rotation-kernels';
+import { degreesOfRowsInto, rotateRowsInto } from '../../src/rotation/rotation-kernels';
 import { PlateAgeGroups } from '../../src/rotation/plate-age-groups';
 import { apply, poleMatrix, unit } from './rodrigues';
 
-// References: the JavaScript engine's Math.sin, Math.cos and Math.atan2 (its libm, not ours),
-// and rotation matrices by Rodrigues' formula (./rodrigues).
+// Reference: rotation matrices by Rodrigues' formula (./rodrigues), applied to unit vectors
+// from Math.sin and Math.cos.
 const RAD = Math.PI / 180;
 const lat = fc.double({ min: -90, max: 90, noNaN: true });
 const lon = fc.double({ min: -180, max: 180, noNaN: true });
-const finite = fc.double({ min: -1e6, max: 1e6, noNaN: true });
-
-describe('unit vectors from degrees without Math.sin and Math.cos', () => {
-  it('agree with Math.sin and Math.cos to 1e-15 anywhere in range', () => {
-    fc.assert(fc.property(lat, lon, (la, lo) => {
-      const v = new Float64Array(3);
-      writeUnitVectorFast(la, lo, v, 0);
-      const expected = [Math.cos(la * RAD) * Math.cos(lo * RAD), Math.cos(la * RAD) * Math.sin(lo * RAD), Math.sin(la * RAD)];
-      for (let i = 0; i < 3; i++) expect(Math.abs(v[i] - expected[i])).toBeLessThan(1e-15);
-    }), { numRuns: 5000 });
-  });
-
-  it('are exact at multiples of 90°: the poles are (0, 0, ±1) at any longitude, ±180° the same place', () => {
-    const v = new Float64Array(3);
-    for (const lo of [-180, -90, 0, 90, 180, 37.5]) {
-      writeUnitVectorFast(90, lo, v, 0);
-      expect(Array.from(v).map(Math.abs)).toEqual([0, 0, 1]);
-      writeUnitVectorFast(-90, lo, v, 0);
-      expect(v[2]).toBe(-1);
-    }
-    writeUnitVectorFast(0, 180, v, 0);
-    expect(Array.from(v)).toEqual([-1, 0, 0]);
-    writeUnitVectorFast(0, -90, v, 0);
-    expect(Array.from(v)).toEqual([0, -1, 0]);
-  });
-});
-
-describe('atan2 without Math.atan2', () => {
-  it('agrees with Math.atan2 to 1e-15 radians over all quadrants and scales (as a direction: −π is π)', () => {
-    fc.assert(fc.property(finite, finite, fc.integer({ min: -300, max: 300 }), (y, x, e) => {
-      const scaled = y * 2 ** e;
-      fc.pre(x !== 0 || scaled !== 0);
-      const d = atan2Fast(scaled, x) - Math.atan2(scaled, x);
-      expect(Math.abs(d - 2 * Math.PI * Math.round(d / (2 * Math.PI)))).toBeLessThan(1e-15);
-    }), { numRuns: 5000 });
-  });
-
-  it('gives the axes and diagonals exactly as Math.atan2 does, and 0 for (0, 0)', () => {
-    for (const [y, x] of [[0, 1], [1, 0], [0, -1], [-1, 0], [1, 1], [-1, -1], [1, -1], [-1, 1], [3, 3]]) {
-      expect(Math.abs(atan2Fast(y, x) - Math.atan2(y, x))).toBeLessThanOrEqual(4.5e-16);
-    }
-    expect(atan2Fast(0, 0)).toBe(0);
-  });
-});
 
 describe('rotating runs of rows', () => {
   it('turns each row by its group’s matrix and back to degrees as a Rodrigues matrix does, NaN for rows without a group', () => {
