@@ -11,4 +11,4 @@ export { minimumSpanningTree, type SpanningTree } from './minimum-spanning-tree'
 export { latitudeStats, type LatitudeStats } from './latitude-stats';
 export { sphericalCentroid, CENTROID_UNDEFINED_BELOW, type SphericalCentroid } from './spherical-centroid';
 export { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongitude } from './great-circle-path';
-export { splitAtAntimeridian, type Ring } from './split-antimeridian';
+export { splitAtAntimeridian } from './split-antimeridian';

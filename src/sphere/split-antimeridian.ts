@@ -1,3 +1,4 @@
+/** A ring of [longitude, latitude] pairs in degrees. */
 export type Ring = Array<[number, number]>;
 
 /**

@@ -1,11 +1,15 @@
 // The whole command-line path on a 1,000,000-row table with about 100 slices (the chart's stages),
 // against the straightforward reference in reference-pipeline.ts. Targets (issue: core pipeline):
-// end to end ≤ 3 s wall and peak RSS ≤ 1 GB on a 2-core machine.
+// end to end ≤ 3 s wall and peak RSS ≤ 1 GB on a 2-core machine. Then the same command on the
+// same places given as present-day positions on the demo's plates, placed by its rotation model
+// (every row clamped into the model's reach), at each slice's mid-age and at each row's own age:
+// what the rotation costs end to end.
 import { spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { syntheticTable } from './synthetic-table';
+import { demoModel } from './rotation-fixtures';
 
 const ROWS = 1_000_000;
 const RUNS = 3;
@@ -47,6 +51,13 @@ export async function run(): Promise<void> {
     const slices = readFileSync(join(out, 'slices.csv'), 'utf8').trim().split('\n').slice(1).map((line) => line.split(','));
     const agree = slices.every((f, s) => [f[4], f[5], f[6], f[7]].map(Number).join() === figures.slices[s].join());
     console.log(`${''.padEnd(44)} per-slice occurrences, collections, taxa, cells agree with the reference: ${agree ? 'yes' : 'NO'}`);
+    const modelTable = await syntheticTable(ROWS, 7, demoModel().plateIds());
+    const rotated = [...cli.slice(0, 2), modelTable, ...cli.slice(3), '--rotation', 'assets/demo/poles.csv', '--beyond-model', 'clamp'];
+    for (const [label, args] of [['… placed by the model at slice mid-ages', rotated], ['… placed by the model at each row\'s own age', [...rotated, '--rotate-at', 'occurrence']]] as const) {
+      runProcess([...args]); // warm-up: file cache
+      const min = summarise(label, Array.from({ length: RUNS }, () => runProcess([...args])), '');
+      console.log(`${''.padEnd(44)} more than from the table's palaeocoordinates: ${((min - oursMin) / 1000).toFixed(2)} s`);
+    }
   } finally {
     rmSync(out, { recursive: true, force: true });
   }

@@ -9,16 +9,21 @@ import { createSeededRandom } from '../../src/time';
 const FORMAT_VERSION = 1;
 const OLDEST_MA = 538;
 
-/** Path of the cached table with `rows` rows for `seed`, written on first use. */
-export async function syntheticTable(rows: number, seed = 7): Promise<string> {
-  const path = join(tmpdir(), `driftgrid-bench-${rows}-${seed}-v${FORMAT_VERSION}.csv`);
+/**
+ * Path of the cached table with `rows` rows for `seed`, written on first use. With `plates`,
+ * each collection gets one of those plate ids and the positions are present-day ones (`lat`,
+ * `lon`, `plate_id`) for a rotation model to place, instead of `palaeo_lat`, `palaeo_lon`.
+ */
+export async function syntheticTable(rows: number, seed = 7, plates?: readonly number[]): Promise<string> {
+  const kind = plates === undefined ? '' : `-plates${plates.join('_')}`;
+  const path = join(tmpdir(), `driftgrid-bench-${rows}-${seed}${kind}-v${FORMAT_VERSION}.csv`);
   if (existsSync(path)) return path;
   const random = createSeededRandom(seed);
   const u = () => random.nextUniform();
   const centres = Array.from({ length: 400 }, () => [Math.asin(2 * u() - 1) * (180 / Math.PI), 360 * u() - 180]);
   const partial = `${path}.part`;
   const out = createWriteStream(partial);
-  out.write('taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection,environment\n');
+  out.write(plates === undefined ? 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection,environment\n' : 'taxon,max_ma,min_ma,lat,lon,plate_id,collection,environment\n');
   let written = 0;
   let collection = 0;
   while (written < rows) {
@@ -30,10 +35,11 @@ export async function syntheticTable(rows: number, seed = 7): Promise<string> {
     const minMa = Math.max(0, maxMa - 12 * u());
     const size = 1 + Math.floor(u() * 12);
     const env = u() < 0.7 ? 'marine' : '"terrestrial, fluvial"';
+    const place = `${lat.toFixed(4)},${lon.toFixed(4)}${plates === undefined ? '' : `,${plates[Math.floor(u() * plates.length)]}`}`;
     let chunk = '';
     for (let k = 0; k < size && written < rows; k++, written++) {
       const taxon = `Genus${Math.floor(u() * u() * 20000)}`;
-      chunk += `${taxon},${maxMa.toFixed(2)},${minMa.toFixed(2)},${lat.toFixed(4)},${lon.toFixed(4)},C${collection},${env}\n`;
+      chunk += `${taxon},${maxMa.toFixed(2)},${minMa.toFixed(2)},${place},C${collection},${env}\n`;
     }
     if (!out.write(chunk)) await new Promise<void>((resolve) => out.once('drain', () => resolve()));
   }
