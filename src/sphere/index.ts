@@ -11,3 +11,5 @@ export { minimumSpanningTree, type SpanningTree } from './minimum-spanning-tree'
 export { latitudeStats, type LatitudeStats } from './latitude-stats';
 export { sphericalCentroid, CENTROID_UNDEFINED_BELOW, type SphericalCentroid } from './spherical-centroid';
 export { appendGreatCircleArc, continuousLongitude } from './great-circle-path';
+export { hullLever, type HullLever } from './hull-lever';
+export { spanWithoutDeg } from './span-without';

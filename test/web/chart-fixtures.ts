@@ -7,6 +7,7 @@ export function slice(name: string, baseMa: number, topMa: number, values: Parti
   return {
     name, baseMa, topMa, occurrences: 0, collections: 0, taxa: 0, cells: 0,
     positions: 0, hullKm2: NaN, hullNote: undefined, mstKm: NaN, latMin: NaN, latMax: NaN, latSpan: NaN, centroidLat: NaN, centroidLon: NaN,
+    hullLeverLat: NaN, hullLeverLon: NaN, hullWithoutKm2: NaN, spanWithoutDeg: NaN,
     ...values,
   };
 }

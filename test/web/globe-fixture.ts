@@ -39,6 +39,7 @@ export function fixtureView(): AnalysisView {
   const metrics = (name: string, cells: number) => ({
     name, baseMa: 10, topMa: 5, occurrences: 1, collections: 1, taxa: 1, cells, positions: 1, hullKm2: Number.NaN,
     hullNote: 'made up', mstKm: 0, latMin: 0, latMax: 0, latSpan: 0, centroidLat: 0, centroidLon: 0,
+    hullLeverLat: Number.NaN, hullLeverLon: Number.NaN, hullWithoutKm2: Number.NaN, spanWithoutDeg: Number.NaN,
   });
   return {
     settings: DEFAULT_SETTINGS, gridName: FIXTURE_GRID.name, cellAreaKm2: 1, slices: [metrics('A', 3), metrics('B', 2)],

@@ -4,7 +4,8 @@
 // and a few indicator sites. Nothing here is real data.
 import type { Feature, FeatureCollection, Position } from 'geojson';
 import type { SliceMetrics } from '../../src/analysis';
-import { measureFootprint } from '../../src/footprint/slice-footprint';
+import { measureFootprintWithShapes } from '../../src/footprint/slice-footprint';
+import { measureLevers } from '../../src/footprint/slice-levers';
 import { parseGridName } from '../../src/grid';
 import { appendGreatCircleArc, convexHull, minimumSpanningTree } from '../../src/sphere';
 import { createSeededRandom } from '../../src/time';
@@ -87,9 +88,10 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
     }
     hulls.endSlice();
     trees.endSlice();
+    const measured = measureFootprintWithShapes(lat, lon);
     metrics.push({
       name: s.name, baseMa: s.baseMa, topMa: s.topMa, occurrences, collections: lat.length,
-      taxa: Math.round(occurrences / 2), cells: byCell.size, ...measureFootprint(lat, lon),
+      taxa: Math.round(occurrences / 2), cells: byCell.size, ...measured.footprint, ...measureLevers(lat, lon, measured.shapes.hullRing),
     });
   });
 
