@@ -145,6 +145,7 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
     shapes: { ringStart: Uint32Array.from(ringStart), coords: Float32Array.from(coords), centre: Float32Array.from(centre) },
     hulls: hulls.finish(),
     spanningTrees: trees.finish(),
+    leverRows: { sliceStart: new Uint32Array(metrics.length + 1), line: new Uint32Array(0) },
     latitude: { bandDeg: 10, bands, perSlice: new Uint32Array(slices.length * bands), total: new Uint32Array(bands) },
     indicators: {
       sliceStart: Uint32Array.from(indicatorStart), lat: Float32Array.from(indicatorLat), lon: Float32Array.from(indicatorLon),

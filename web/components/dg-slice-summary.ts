@@ -1,10 +1,12 @@
 /**
  * The current slice's numbers (the same as its row of slices.csv) and the cautions that go with
- * them: no hull and why, a hull close to a hemisphere, few positions.
+ * them: no hull and why, a hull close to a hemisphere, few positions; and the hull lever, the
+ * place whose removal shrinks the hull most, with the lines of its rows.
  */
 import { LitElement, css, html, nothing } from 'lit';
 import type { AnalysisView } from '../protocol';
 import { EARTH_RADIUS_KM } from '../../src/sphere';
+import { positionWords } from '../text';
 import { panelStyles } from './shared-styles';
 
 /** Below this many distinct positions every footprint measure is noisy (our rule of thumb; README "Read the numbers with care"). */
@@ -12,6 +14,8 @@ const FEW_POSITIONS = 10;
 /** A hull covering more than this share of the sphere is governed by a few outlying sites. */
 const WIDE_HULL_SHARE = 0.35;
 const SPHERE_KM2 = 4 * Math.PI * EARTH_RADIUS_KM ** 2;
+/** Lines of the lever's rows listed by number; the rest are counted. */
+const LISTED_LINES = 8;
 
 const number = (v: number, decimals = 0): string =>
   Number.isFinite(v) ? v.toLocaleString('en', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }) : '—';
@@ -33,6 +37,18 @@ export class DgSliceSummary extends LitElement {
     dd { margin: 0; text-align: right; font-variant-numeric: tabular-nums; }
     ul { margin: 0.4rem 0 0; padding-left: 1.1rem; font-size: 0.85em; color: #6b3a00; }
   `];
+
+  /** The hull lever (ringed on the maps) and the lines of its rows, when the slice has a hull. */
+  private renderLever() {
+    const s = this.view?.slices[this.slice];
+    if (this.view === undefined || s === undefined || Number.isNaN(s.hullLeverLat)) return nothing;
+    const { sliceStart, line } = this.view.leverRows;
+    const lines = Array.from(line.subarray(sliceStart[this.slice], sliceStart[this.slice + 1]));
+    const listed = lines.slice(0, LISTED_LINES).join(', ') + (lines.length > LISTED_LINES ? ` and ${lines.length - LISTED_LINES} more` : '');
+    return html`<p class="hint" data-field="hull_lever">
+      Hull lever (ringed on the map): ${positionWords(s.hullLeverLat, s.hullLeverLon)}${lines.length === 0 ? '' : html`, ${lines.length === 1 ? 'line' : 'lines'} <span data-field="hull_lever_lines">${listed}</span>`}
+    </p>`;
+  }
 
   override render() {
     const s = this.view?.slices[this.slice];
@@ -56,7 +72,10 @@ export class DgSliceSummary extends LitElement {
         <dt>Hull area, km²</dt><dd data-field="hull_km2">${number(s.hullKm2)}</dd>
         <dt>Spanning tree, km</dt><dd data-field="mst_km">${number(s.mstKm)}</dd>
         <dt>Latitude span, °</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
+        <dt>Hull without its lever, km²</dt><dd data-field="hull_without_km2">${number(s.hullWithoutKm2)}</dd>
+        <dt>Span without one place, °</dt><dd data-field="span_without_deg">${number(s.spanWithoutDeg, 1)}</dd>
       </dl>
+      ${this.renderLever()}
       ${cautions.length === 0 ? nothing : html`<ul aria-label="Cautions">${cautions.map((c) => html`<li>${c}</li>`)}</ul>`}`;
   }
 }
