@@ -8,6 +8,7 @@ import { slicePositions } from './footprint/slice-positions';
 import { tallyCells, type CellTallies } from './footprint/cell-tallies';
 import { gather } from './footprint/gather';
 import { measureFootprintWithShapes, type Footprint, type FootprintShapes } from './footprint/slice-footprint';
+import type { SliceLevers } from './footprint/slice-levers';
 import { DEFAULT_PLACEMENT, placeOccurrences, type Placement, type PlacementSettings } from './placement/place-occurrences';
 import { collectExclusions, type Exclusions } from './placement/exclusions';
 import type { RotationModel } from './rotation/rotation-model';
@@ -24,7 +25,7 @@ export interface AnalysisSettings {
 }
 
 /** Per-slice results, one entry per slice of the scale, oldest first. */
-export interface SliceMetrics extends Footprint {
+export interface SliceMetrics extends Footprint, SliceLevers {
   readonly name: string;
   readonly baseMa: number;
   readonly topMa: number;
@@ -112,6 +113,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
       taxa: taxonCounter.count(rows.taxon, inOrder, from, to),
       cells: occupied,
       ...measured.footprint,
+      ...measured.levers,
     });
   }
 

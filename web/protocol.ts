@@ -122,6 +122,12 @@ export interface CellShapes {
   readonly centre: Float32Array;
 }
 
+/** Source-file lines grouped by slice: slice s owns line[sliceStart[s]] … line[sliceStart[s + 1] − 1], in file order. */
+export interface LeverRows {
+  readonly sliceStart: Uint32Array;
+  readonly line: Uint32Array;
+}
+
 /** Points grouped by slice: slice s owns points sliceStart[s] … sliceStart[s + 1] − 1. */
 export interface PointSet {
   readonly sliceStart: Uint32Array;
@@ -167,6 +173,8 @@ export interface AnalysisView {
   readonly shapes: CellShapes;
   readonly hulls: PathSet;
   readonly spanningTrees: PathSet;
+  /** Lines of the rows at each slice's hull lever (slices[s].hullLeverLat/Lon). */
+  readonly leverRows: LeverRows;
   readonly latitude: LatitudeCounts;
   readonly indicators?: IndicatorPoints;
   /** Base polygons reconstructed to each slice's mid-age (present when polygons and a model are loaded). */

@@ -7,6 +7,7 @@ import { rejectsCsv } from '../export/rejects-csv';
 import { sessionJson, sessionSummary, SESSION_FORMAT, SESSION_FORMAT_VERSION, type Session } from '../export/session';
 import { slicesCsv } from '../export/slices-csv';
 import { parseGridName } from '../grid';
+import { loneOldestRow } from '../table/lone-oldest-row';
 import { oldestAge } from '../table/oldest-age';
 import { findChartInterval, parseAssignRule, parseBinsOption } from '../time';
 import type { TimeScale } from '../time/time-scale';
@@ -22,6 +23,7 @@ import { TOOL_VERSION } from './version';
 import { writeResults } from './write-results';
 
 export const BIN_KEYWORDS = /^(periods|epochs|stages|equal:.*)$/i;
+const EQUAL_BINS = /^\s*equal:/i;
 
 /** `driftgrid coverage`: table → slices → positions → cells → measures → files. */
 export async function runCoverage(args: readonly string[]): Promise<number> {
@@ -55,6 +57,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
 
   // Equal bins reach back to the oldest age in the table; chart ranks are always whole.
   const scale: TimeScale = userScale ?? parseBinsOption(options.bins, oldestAge(read.table));
+  const loneOldest = EQUAL_BINS.test(options.bins) ? loneOldestRow(read.table, scale.baseMa[0] - scale.topMa[0]) : undefined;
   const placement = { rotateAt: options.rotateAt, preferModel: options.preferModel };
   const result = analyse(read.table, { scale, rule, grid, rotation: model, placement });
   const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, read.table, result.exclusions, result.placement, model, options.rotateAt))];
@@ -87,7 +90,10 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
     [input, ...(binsFile === undefined ? [] : [binsFile]), ...(rotationFile === undefined ? [] : [rotationFile])],
   );
   if (!options.quiet) {
-    printSummary({ rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result, model, written, elapsedMs: performance.now() - started });
+    printSummary({
+      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result, model, loneOldest, written,
+      elapsedMs: performance.now() - started,
+    });
   }
   return 0;
 }

@@ -1,7 +1,9 @@
 import { EXCLUSION_REASONS, exclusionStatus, type AnalysisResult } from '../analysis';
 import { SLICE_CAUTION, sliceCautions, type SliceCaution, type SliceNumbers } from '../footprint';
 import type { RotationModel } from '../rotation';
+import type { LoneOldestRow } from '../table/lone-oldest-row';
 import type { RejectedRow } from '../table/occurrence-table';
+import { formatMa } from '../time/equal-bins';
 
 export interface RunSummary {
   readonly rowsRead: number;
@@ -9,6 +11,8 @@ export interface RunSummary {
   readonly rejects: readonly RejectedRow[];
   readonly result: AnalysisResult;
   readonly model: RotationModel | undefined;
+  /** Under equal bins, the row that alone stretches them far back (see loneOldestRow). */
+  readonly loneOldest?: LoneOldestRow;
   readonly written: readonly string[];
   readonly elapsedMs: number;
 }
@@ -26,6 +30,7 @@ export function printSummary(summary: RunSummary): void {
     out.push(`  not in any slice, ${reason}: ${n(count)}`);
   }
   out.push(...placementLines(result, summary.model));
+  if (summary.loneOldest !== undefined) out.push(loneOldestLine(summary.loneOldest, result));
   const occupied = result.slices.filter((s) => s.occurrences > 0).length;
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);
   out.push(...cautionLines(result.slices));
@@ -77,6 +82,15 @@ function cautionWording(caution: SliceCaution): string | undefined {
 /** What the rotation model accepted but should be told (unused columns, repeated rows). */
 export function modelNotes(model: RotationModel): string[] {
   return model.notes.map((note) => `  rotation model note: ${note}`);
+}
+
+/** Names the row that alone stretches equal bins back, with the age of every other row. */
+function loneOldestLine(row: LoneOldestRow, result: AnalysisResult): string {
+  const reach = result.slices.length > 0 ? formatMa(result.slices[0].baseMa) : formatMa(row.ageMa);
+  return (
+    `  note: line ${row.line} alone stretches the equal bins back to ${reach} Ma: its max_ma is ${formatMa(row.ageMa)} Ma, ` +
+    `every other row's is ${formatMa(row.nextAgeMa)} Ma or younger (check that row's age)`
+  );
 }
 
 /** Slice names listed per reason in the summary; the rest are counted. */

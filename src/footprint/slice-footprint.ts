@@ -1,3 +1,4 @@
+import { measureLevers, type SliceLevers } from './slice-levers';
 import { convexHull, degreesToUnitVectors, latitudeStats, minimumSpanningTree, polygonAreaKm2, sphericalCentroid } from '../sphere';
 
 /** Geographic footprint of one slice, measured over its distinct positions. */
@@ -33,8 +34,9 @@ export function measureFootprint(latDeg: Float64Array, lonDeg: Float64Array): Fo
 }
 
 /** measureFootprint, keeping the hull and tree it measured (so that views need not build them
- * again). The positions become unit vectors once, for hull, area, tree and centroid alike. */
-export function measureFootprintWithShapes(latDeg: Float64Array, lonDeg: Float64Array): { footprint: Footprint; shapes: FootprintShapes } {
+ * again), and the slice's levers. The positions become unit vectors once, for hull, area, tree,
+ * centroid and levers alike. */
+export function measureFootprintWithShapes(latDeg: Float64Array, lonDeg: Float64Array): { footprint: Footprint; levers: SliceLevers; shapes: FootprintShapes } {
   const n = latDeg.length;
   const xyz = degreesToUnitVectors(latDeg, lonDeg);
   const hull = convexHull(xyz);
@@ -52,5 +54,6 @@ export function measureFootprintWithShapes(latDeg: Float64Array, lonDeg: Float64
     centroidLat: centroid.latDeg,
     centroidLon: centroid.lonDeg,
   };
-  return { footprint, shapes: { hullRing: hull.kind === 'hull' ? hull.ring : undefined, treeEdges: tree?.edges ?? new Uint32Array(0) } };
+  const hullRing = hull.kind === 'hull' ? hull.ring : undefined;
+  return { footprint, levers: measureLevers(latDeg, lonDeg, xyz, hullRing), shapes: { hullRing, treeEdges: tree?.edges ?? new Uint32Array(0) } };
 }

@@ -3,7 +3,7 @@ export {
   degreesToUnitVectors, degreesToUnitVectorsInto, writeUnitVector, unitVectorsToDegrees, unitVectorsToDegreesInto,
 } from './unit-vectors';
 export { centralAngle, unitVectorAngle, greatCircleDistanceKm, greatCircleDistancesKmInto } from './distance';
-export { canonicalLatitude, canonicalLongitude } from './position-identity';
+export { canonicalLatitude, canonicalLongitude, samePosition } from './position-identity';
 export { convexHull, HULL_NONE_REASONS, GREAT_CIRCLE_TOLERANCE, type ConvexHull, type HullNoneReason } from './convex-hull';
 export { smallestEnclosingCap, OPEN_HEMISPHERE_MARGIN } from './smallest-enclosing-cap';
 export { polygonAreaSr, polygonAreaKm2 } from './polygon-area';
@@ -12,3 +12,5 @@ export { latitudeStats, type LatitudeStats } from './latitude-stats';
 export { sphericalCentroid, CENTROID_UNDEFINED_BELOW, type SphericalCentroid } from './spherical-centroid';
 export { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongitude } from './great-circle-path';
 export { splitAtAntimeridian } from './split-antimeridian';
+export { hullLever, type HullLever } from './hull-lever';
+export { spanWithoutDeg } from './span-without';

@@ -13,3 +13,8 @@ export function canonicalLongitude(latDeg: number, lonDeg: number): number {
   if (latDeg === 90 || latDeg === -90) return 0;
   return lonDeg === -180 ? 180 : lonDeg + 0;
 }
+
+/** True when the two positions (degrees) name the same place. */
+export function samePosition(lat1Deg: number, lon1Deg: number, lat2Deg: number, lon2Deg: number): boolean {
+  return lat1Deg === lat2Deg && canonicalLongitude(lat1Deg, lon1Deg) === canonicalLongitude(lat2Deg, lon2Deg);
+}

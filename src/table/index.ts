@@ -23,3 +23,5 @@ export type { ResolveInterval } from './occurrence-row';
 export { createOccurrenceReader } from './occurrence-reader';
 export type { OccurrenceReader, OccurrenceReaderOptions, OccurrenceReadResult } from './occurrence-reader';
 export { oldestAge } from './oldest-age';
+export { LONE_STRETCH_SHARE, loneOldestRow } from './lone-oldest-row';
+export type { LoneOldestRow } from './lone-oldest-row';

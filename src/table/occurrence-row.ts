@@ -1,5 +1,6 @@
 import type { ColumnIndex } from './column-synonyms';
 import { MAX_PLATE_ID, describeBadNumber, isBlank, parseDecimalSpan, parsePlateIdSpan } from './number-field';
+import { EARTH_AGE_MA, WITHIN_EARTH_AGE } from '../time/earth-age';
 import { NO_PLATE } from './occurrence-table';
 import type { ScannedRecord } from './scanned-record';
 import { trimmedEnd, trimmedStart } from './text-span';
@@ -43,7 +44,8 @@ const listed = (names: readonly string[]): string =>
 
 /**
  * Reads and checks one record whose field count matches the header, without cutting strings on
- * the common path. Ages: max_ma/min_ma when given, the interval when both are blank. Returns
+ * the common path. Ages: max_ma/min_ma when given, the interval when both are blank; none older
+ * than the Earth (EARTH_AGE_MA). Returns
  * the first problem found, or undefined with `out` filled.
  */
 export function readRow(record: ScannedRecord, index: ColumnIndex, resolve: ResolveInterval, out: RowValues): RowProblem | undefined {
@@ -78,7 +80,7 @@ function readAge(record: ScannedRecord, index: ColumnIndex, resolve: ResolveInte
   const min = num(record, index.min_ma);
   out.maxMa = max;
   out.minMa = min;
-  if (max >= min && min >= 0) return undefined; // the common case; NaN fails both tests
+  if (max >= min && min >= 0 && max <= EARTH_AGE_MA) return undefined; // the common case; NaN fails these tests
   const maxText = str(record, index.max_ma);
   const minText = str(record, index.min_ma);
   const maxBlank = isBlank(maxText);
@@ -100,6 +102,7 @@ function readAge(record: ScannedRecord, index: ColumnIndex, resolve: ResolveInte
 function checkAge(field: string, text: string, v: number): RowProblem | undefined {
   if (Number.isNaN(v)) return { field, reason: describeBadNumber(field, text, AGE) };
   if (v < 0) return { field, reason: `${field} ${shown(text)} is negative; expected ${AGE}` };
+  if (v > EARTH_AGE_MA) return { field, reason: `${field} ${shown(text)} is older than the Earth; expected ${WITHIN_EARTH_AGE}` };
   return undefined;
 }
 
@@ -115,6 +118,9 @@ function readInterval(record: ScannedRecord, index: ColumnIndex, resolve: Resolv
   const unit = resolve(name);
   if (unit === undefined) {
     return { field: 'interval', reason: `interval ${JSON.stringify(name)} is not a known interval; expected a name from the built-in time chart` };
+  }
+  if (unit.baseMa > EARTH_AGE_MA) {
+    return { field: 'interval', reason: `interval ${JSON.stringify(name)} has its base at ${unit.baseMa} Ma, older than the Earth; expected ${WITHIN_EARTH_AGE}` };
   }
   out.maxMa = unit.baseMa;
   out.minMa = unit.topMa;

@@ -2,6 +2,7 @@ export type { AssignRule, SliceAssignment, TimeScale, UnassignedReasonCode } fro
 export { UNASSIGNED_REASONS } from './time-scale';
 export type { ChartInterval, ChartRank, ChartScaleRank } from './chart';
 export { CHART_VERSION, chartIntervals, chartScale, findChartInterval } from './chart';
+export { EARTH_AGE_MA, WITHIN_EARTH_AGE } from './earth-age';
 export { MAX_EQUAL_BINS, equalBins, formatMa } from './equal-bins';
 export type { BinRecord } from './user-bins';
 export { BIN_COLUMNS, binsFromRecords } from './user-bins';

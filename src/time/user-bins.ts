@@ -1,3 +1,4 @@
+import { EARTH_AGE_MA, WITHIN_EARTH_AGE } from './earth-age';
 import { formatMa } from './equal-bins';
 import { TimeInputError, type TimeInputProblem } from './time-input-error';
 import type { TimeScale } from './time-scale';
@@ -53,6 +54,10 @@ function parseAge(line: number, field: BinColumn, raw: string, found: TimeInputP
     found.push({ line, field, value: raw, expected: 'an age in Ma of 0 or more' });
     return Number.NaN;
   }
+  if (age > EARTH_AGE_MA) {
+    found.push({ line, field, value: raw, expected: WITHIN_EARTH_AGE });
+    return Number.NaN;
+  }
   return age;
 }
 
@@ -90,7 +95,8 @@ function describe(bin: ParsedBin): string {
  * older than top). Bins may come in any order and the result is oldest first; gaps between bins
  * are allowed (an age in a gap belongs to no slice), overlaps are not. Throws TimeInputError
  * listing every problem: missing or unknown columns, wrong field count, empty names,
- * non-numeric or negative ages, base not older than top, duplicate names, overlapping bins.
+ * non-numeric or negative ages, ages older than the Earth, base not older than top, duplicate
+ * names, overlapping bins.
  */
 export function binsFromRecords(header: readonly string[], records: readonly BinRecord[], label: string): TimeScale {
   const index = columnIndex(header);

@@ -41,7 +41,7 @@ describe('driftgrid coverage on a small hand-made table', () => {
 
   it('writes slices.csv with the contract columns, oldest first, counts worked by hand', () => {
     const text = readFileSync(join(out, 'slices.csv'), 'utf8');
-    expect(text.split('\n')[0]).toBe('slice,name,base_ma,top_ma,occurrences,collections,taxa,cells,hull_km2,mst_km,lat_min,lat_max,lat_span,centroid_lat,centroid_lon');
+    expect(text.split('\n')[0]).toBe('slice,name,base_ma,top_ma,occurrences,collections,taxa,cells,hull_km2,mst_km,lat_min,lat_max,lat_span,centroid_lat,centroid_lon,hull_lever_lat,hull_lever_lon,hull_without_km2,span_without_deg');
     const rows = readCsv(join(out, 'slices.csv'));
     expect(rows.map((r) => Number(r.base_ma))).toEqual([20, 10]);
     const [older, younger] = rows;
@@ -58,6 +58,14 @@ describe('driftgrid coverage on a small hand-made table', () => {
     // MST of the triangle: the two 10° sides meeting at (0°, 0°).
     const side = (lat2: number, lon2: number) => (sphere.Inverse(0, 0, lat2, lon2).s12 ?? NaN) / 1000;
     expect(Number(older.mst_km)).toBeCloseTo(side(0, 10) + side(10, 0), 2);
+  });
+
+  it('names the hull lever of the triangle slice and leaves no hull without it; the single-site slice has none', () => {
+    const [older, younger] = readCsv(join(out, 'slices.csv'));
+    // Three places: removing any one leaves two, no hull, so every place ties and the first met
+    // (0°, 0°, line 2) is the lever. The span without (10°N, 0°) is 0.
+    expect([older.hull_lever_lat, older.hull_lever_lon, older.hull_without_km2, older.span_without_deg]).toEqual(['0.000000', '0.000000', '', '0.000000']);
+    expect([younger.hull_lever_lat, younger.hull_lever_lon, younger.hull_without_km2, younger.span_without_deg]).toEqual(['', '', '', '']);
   });
 
   it('writes one cells.csv row per occupied (slice, cell) whose counts add up to the slice', () => {
@@ -123,6 +131,18 @@ describe('driftgrid coverage safeguards', () => {
     const run = await runCli('coverage', input, '--bins', 'equal:10', '--out', join(dir, 'r'));
     expect(run.stdout).toMatch(/names no collections: "collections" counts distinct positions/);
     expect(readCsv(join(dir, 'r', 'slices.csv'))[0].collections).toBe('2');
+  });
+
+  it('names the one row that alone stretches equal bins far back, and stays quiet under chart bins', async () => {
+    const dir = tempDir('stretch');
+    const input = join(dir, 't.csv');
+    // 5000 typed for 500 on line 3 would be refused (older than the Earth); 4000 is a possible slip.
+    writeFileSync(input, 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nA,500,490,1,1\nB,4000,3990,1,1\nC,480,470,2,2\n');
+    const run = await runCli('coverage', input, '--bins', 'equal:10', '--out', join(dir, 'r'));
+    expect(run.status).toBe(0);
+    expect(run.stdout).toMatch(/note: line 3 alone stretches the equal bins back to 4000 Ma: its max_ma is 4000 Ma, every other row's is 500 Ma or younger/);
+    const stages = await runCli('coverage', input, '--bins', 'stages', '--out', join(dir, 's'));
+    expect(stages.stdout).not.toMatch(/stretches/);
   });
 
   it('gives the same results for --assign random with the same seed, and different ones with another', async () => {

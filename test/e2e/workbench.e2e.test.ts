@@ -54,6 +54,7 @@ async function pageSlice(page: Page): Promise<Record<string, string>> {
     name: await field(page, 'name'),
     occurrences: await read('occurrences'), collections: await read('collections'), taxa: await read('taxa'), cells: await read('cells'),
     hull_km2: await read('hull_km2'), mst_km: await read('mst_km'), lat_span: await read('lat_span'),
+    hull_without_km2: await read('hull_without_km2'), span_without_deg: await read('span_without_deg'),
   };
 }
 
@@ -67,6 +68,8 @@ function expectSameSlice(shown: Record<string, string>, row: Record<string, stri
   expect(shown.hull_km2, 'hull_km2').toBe(rounded(row.hull_km2, 0));
   expect(shown.mst_km, 'mst_km').toBe(rounded(row.mst_km, 0));
   expect(shown.lat_span, 'lat_span').toBe(rounded(row.lat_span, 1));
+  expect(shown.hull_without_km2, 'hull_without_km2').toBe(rounded(row.hull_without_km2, 0));
+  expect(shown.span_without_deg, 'span_without_deg').toBe(rounded(row.span_without_deg, 1));
 }
 
 describe('the workbench with the demo scenario', () => {

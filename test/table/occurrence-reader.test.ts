@@ -93,6 +93,10 @@ describe('rejected rows', () => {
       ['A,10,5,,,1,181,,,', 'lon', /from -180 to 180 \(longitudes from 0 to 360 must be converted first\)$/],
       ['A,5,10,1,2,,,,,', 'max_ma', /^max_ma "5" is less than min_ma "10"; max_ma is the older end/],
       ['A,10,-0.5,1,2,,,,,', 'min_ma', /^min_ma "-0.5" is negative; expected an age in Ma before present, 0 or more$/],
+      // The Earth's age bound: 4567 Ma (Connelly et al. 2012, Science 338:651, from memory).
+      ['A,5000,500,1,2,,,,,', 'max_ma', /^max_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/],
+      ['A,4567.5,4567.2,1,2,,,,,', 'max_ma', /^max_ma "4567.5" is older than the Earth/],
+      ['A,6000,5000,1,2,,,,,', 'max_ma', /^max_ma "6000" is older than the Earth/],
       ['A,,,1,2,,,,,Cretaceous Park', 'interval', /^interval "Cretaceous Park" is not a known interval; expected a name from the built-in time chart$/],
       ['A,,,1,2,,,,,', 'interval', /^no age: max_ma, min_ma and interval are blank; expected max_ma and min_ma in Ma, or an interval name$/],
       ['A,10,,1,2,,,,,Aptian', 'min_ma', /^min_ma is blank but max_ma is "10"; give both, or leave both blank to use the interval$/],

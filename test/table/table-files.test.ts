@@ -59,6 +59,7 @@ const BAD_FIXTURES: Readonly<Record<string, Expectation>> = {
   'lon-181.csv': { accepted: 1, rejects: [[3, 'palaeo_lon', /^palaeo_lon "181" is out of range; expected decimal degrees from -180 to 180 \(longitudes from 0 to 360/]] },
   'ages-reversed.csv': { accepted: 1, rejects: [[3, 'max_ma', /^max_ma "90" is less than min_ma "100"; max_ma is the older end of the age range/]] },
   'negative-age.csv': { accepted: 1, rejects: [[3, 'min_ma', /^min_ma "-3" is negative; expected an age in Ma before present, 0 or more$/]] },
+  'older-than-earth.csv': { accepted: 2, rejects: [[3, 'max_ma', /^max_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/]] },
   'half-age-value.csv': { accepted: 1, rejects: [[3, 'min_ma', /^min_ma is blank but max_ma is "12"; give both$/]] },
   'unknown-interval.csv': { accepted: 1, rejects: [[3, 'interval', /^interval "Jurassic Park" is not a known interval; expected a name from the built-in time chart$/]] },
   'missing-taxon-value.csv': { accepted: 1, rejects: [[3, 'taxon', /^taxon is blank; every row needs a taxon name$/]] },

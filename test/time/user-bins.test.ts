@@ -48,6 +48,13 @@ describe('bins from a table', () => {
     ]);
   });
 
+  it('refuses a bin older than the Earth (4567 Ma; Connelly et al. 2012, Science 338:651, from memory)', () => {
+    expect(problemsOf(() => binsFromRecords(HEADER, rows(['a', '5000', '4000'], ['b', '4000', '0']), 'bins'))).toEqual([
+      'line 2, base_ma "5000": expected an age no older than the Earth (4567 Ma)',
+    ]);
+    expect(binsFromRecords(HEADER, rows(['a', '4567', '0']), 'bins').baseMa[0]).toBe(4567);
+  });
+
   it('refuses a base that is not older than the top', () => {
     expect(problemsOf(() => binsFromRecords(HEADER, rows(['a', '10', '10'], ['b', '5', '8']), 'bins'))).toEqual([
       'line 2, base_ma "10": expected an age older than top_ma (10 Ma)',

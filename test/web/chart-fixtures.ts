@@ -7,6 +7,7 @@ export function slice(name: string, baseMa: number, topMa: number, values: Parti
   return {
     name, baseMa, topMa, occurrences: 0, collections: 0, taxa: 0, cells: 0,
     positions: 0, hullKm2: NaN, hullNote: undefined, mstKm: NaN, latMin: NaN, latMax: NaN, latSpan: NaN, centroidLat: NaN, centroidLon: NaN,
+    hullLeverLat: NaN, hullLeverLon: NaN, hullWithoutKm2: NaN, spanWithoutDeg: NaN,
     ...values,
   };
 }
@@ -21,7 +22,8 @@ export function view(slices: readonly SliceMetrics[], latitude: LatitudeCounts, 
     collectionsArePositions: false, excluded: 0, positions: emptyPoints,
     cells: { sliceStart: new Uint32Array(slices.length + 1), cell: new Uint32Array(0), shape: new Uint32Array(0), occurrences: new Uint32Array(0), collections: new Uint32Array(0), taxa: new Uint32Array(0) },
     shapes: { ringStart: new Uint32Array(1), coords: new Float32Array(0), centre: new Float32Array(0) },
-    hulls: emptyPaths, spanningTrees: emptyPaths, latitude, notes: [],
+    hulls: emptyPaths, spanningTrees: emptyPaths, leverRows: { sliceStart: new Uint32Array(slices.length + 1), line: new Uint32Array(0) },
+    latitude, notes: [],
     ...extra,
   };
 }

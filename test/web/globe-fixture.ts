@@ -39,6 +39,7 @@ export function fixtureView(): AnalysisView {
   const metrics = (name: string, cells: number) => ({
     name, baseMa: 10, topMa: 5, occurrences: 1, collections: 1, taxa: 1, cells, positions: 1, hullKm2: Number.NaN,
     hullNote: 'made up', mstKm: 0, latMin: 0, latMax: 0, latSpan: 0, centroidLat: 0, centroidLon: 0,
+    hullLeverLat: Number.NaN, hullLeverLon: Number.NaN, hullWithoutKm2: Number.NaN, spanWithoutDeg: Number.NaN,
   });
   return {
     settings: DEFAULT_SETTINGS, gridName: FIXTURE_GRID.name, cellAreaKm2: 1, slices: [metrics('A', 3), metrics('B', 2)],
@@ -52,6 +53,7 @@ export function fixtureView(): AnalysisView {
     // Slice 0: one closed triangle path; slice 1: two open paths.
     hulls: { sliceStart: Uint32Array.of(0, 1, 3), pathStart: Uint32Array.of(0, 4, 6, 9), coords: Float32Array.of(0, 0, 10, 0, 5, 5, 0, 0, 1, 1, 2, 2, 3, 3, 4, 4, 5, 5) },
     spanningTrees: { sliceStart: Uint32Array.of(0, 0, 1), pathStart: Uint32Array.of(0, 2), coords: Float32Array.of(7, 7, 8, 8) },
+    leverRows: { sliceStart: Uint32Array.of(0, 0, 0), line: new Uint32Array(0) },
     latitude: { bandDeg: 90, bands: 2, perSlice: new Uint32Array(4), total: new Uint32Array(2) },
     indicators: { sliceStart: Uint32Array.of(0, 2, 3), lon: Float32Array.of(1, 2, 3), lat: Float32Array.of(4, 5, 6), kinds: ['coal', 'reef'], kind: Uint8Array.of(1, 0, 1) },
     basePolygons: [polygons, polygons],

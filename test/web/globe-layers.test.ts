@@ -15,7 +15,7 @@ const ALL_ON = { cells: true, points: true, hull: true, spanningTree: true, poly
 describe('sliceLayers', () => {
   it('names every layer by generation and slice, in drawing order', () => {
     const layers = sliceLayers(data, { generation: 3, current: true, layers: ALL_ON, includePoints: true });
-    expect(layers.map((l) => l.id)).toEqual(['polygons-g3-s1', 'cells-g3-s1', 'hull-g3-s1', 'tree-g3-s1', 'indicators-g3-s1', 'points-g3-s1']);
+    expect(layers.map((l) => l.id)).toEqual(['polygons-g3-s1', 'cells-g3-s1', 'hull-g3-s1', 'tree-g3-s1', 'lever-g3-s1', 'indicators-g3-s1', 'points-g3-s1']);
     expect(cellLayerId(3, 1)).toBe('cells-g3-s1');
   });
 
@@ -27,7 +27,7 @@ describe('sliceLayers', () => {
   it('shows the current slice’s layers as the switches say', () => {
     const layers = sliceLayers(data, { generation: 0, current: true, layers: DEFAULT_LAYERS, includePoints: true });
     const visible = Object.fromEntries(layers.map((l) => [l.id.split('-')[0], l.props.visible]));
-    expect(visible).toEqual({ polygons: true, cells: true, hull: true, tree: false, indicators: false, points: true });
+    expect(visible).toEqual({ polygons: true, cells: true, hull: true, tree: false, lever: true, indicators: false, points: true });
   });
 
   it('leaves the places layer out when it may not be drawn, so its buffers are freed', () => {

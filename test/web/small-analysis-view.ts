@@ -4,7 +4,7 @@
 // and a few indicator sites. Nothing here is real data.
 import type { Feature, FeatureCollection, Position } from 'geojson';
 import type { SliceMetrics } from '../../src/analysis';
-import { measureFootprint } from '../../src/footprint/slice-footprint';
+import { measureFootprintWithShapes } from '../../src/footprint/slice-footprint';
 import { parseGridName } from '../../src/grid';
 import { appendGreatCircleArc, convexHull, degreesToUnitVectors, minimumSpanningTree } from '../../src/sphere';
 import { createSeededRandom } from '../../src/time';
@@ -87,9 +87,10 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
     }
     hulls.endSlice();
     trees.endSlice();
+    const measured = measureFootprintWithShapes(lat, lon);
     metrics.push({
       name: s.name, baseMa: s.baseMa, topMa: s.topMa, occurrences, collections: lat.length,
-      taxa: Math.round(occurrences / 2), cells: byCell.size, ...measureFootprint(lat, lon),
+      taxa: Math.round(occurrences / 2), cells: byCell.size, ...measured.footprint, ...measured.levers,
     });
   });
 
@@ -143,6 +144,7 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
     shapes: { ringStart: Uint32Array.from(ringStart), coords: Float32Array.from(coords), centre: Float32Array.from(centre) },
     hulls: hulls.finish(),
     spanningTrees: trees.finish(),
+    leverRows: { sliceStart: new Uint32Array(metrics.length + 1), line: new Uint32Array(0) },
     latitude: { bandDeg: 10, bands, perSlice: new Uint32Array(slices.length * bands), total: new Uint32Array(bands) },
     indicators: {
       sliceStart: Uint32Array.from(indicatorStart), lat: Float32Array.from(indicatorLat), lon: Float32Array.from(indicatorLon),

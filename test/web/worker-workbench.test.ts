@@ -71,6 +71,20 @@ describe('the analysis worker', () => {
     checkCellShapes(view);
   });
 
+  it('names the lines of the rows at each slice’s hull lever', async () => {
+    // A 10° square of places, one inside, and a far place (30°N, 5°E) on lines 5 and 8: it about
+    // doubles the hull (test/sphere/hull-lever.test.ts works this slice against geographiclib).
+    const rows = ['0,0', '0,10', '10,10', '30,5', '10,0', '5,5', '30,5'].map((place, k) => `T${k},8,6,${place}`);
+    const csv = ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon', ...rows].join('\n');
+    const bench = new Workbench();
+    bench.setTable(await readOccurrenceTable({ kind: 'file', file: new File([csv], 'lever.csv') }, {}, progress));
+    const { view } = bench.analyse({ ...DEFAULT_SETTINGS, bins: 'equal:10' });
+    expect(view.slices).toHaveLength(1);
+    expect([view.slices[0].hullLeverLat, view.slices[0].hullLeverLon]).toEqual([30, 5]);
+    expect(Array.from(view.leverRows.line)).toEqual([5, 8]);
+    expect(Array.from(view.leverRows.sliceStart)).toEqual([0, 2]);
+  });
+
   it('lists the taxa of one cell from the rows in it', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
     const { view } = bench.analyse(DEFAULT_SETTINGS);

@@ -1,11 +1,16 @@
 /**
- * The current slice's numbers (the same as its row of slices.csv) and the cautions the core
- * decides for them (src/footprint/slice-cautions.ts), worded for the page.
+ * The current slice's numbers (the same as its row of slices.csv), the cautions the core decides
+ * for them (src/footprint/slice-cautions.ts) worded for the page, and the hull lever: the place
+ * whose removal shrinks the hull most, with the lines of its rows.
  */
 import { LitElement, css, html, nothing } from 'lit';
 import type { AnalysisView } from '../protocol';
 import { SLICE_CAUTION, sliceCautions, type SliceCaution } from '../../src/footprint';
+import { positionWords } from '../text';
 import { panelStyles } from './shared-styles';
+
+/** Lines of the lever's rows listed by number; the rest are counted. */
+const LISTED_LINES = 8;
 
 const number = (v: number, decimals = 0): string =>
   Number.isFinite(v) ? v.toLocaleString('en', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }) : '—';
@@ -28,6 +33,18 @@ export class DgSliceSummary extends LitElement {
     ul { margin: 0.4rem 0 0; padding-left: 1.1rem; font-size: 0.85em; color: #6b3a00; }
   `];
 
+  /** The hull lever (ringed on the maps) and the lines of its rows, when the slice has a hull. */
+  private renderLever() {
+    const s = this.view?.slices[this.slice];
+    if (this.view === undefined || s === undefined || Number.isNaN(s.hullLeverLat)) return nothing;
+    const { sliceStart, line } = this.view.leverRows;
+    const lines = Array.from(line.subarray(sliceStart[this.slice], sliceStart[this.slice + 1]));
+    const listed = lines.slice(0, LISTED_LINES).join(', ') + (lines.length > LISTED_LINES ? ` and ${lines.length - LISTED_LINES} more` : '');
+    return html`<p class="hint" data-field="hull_lever">
+      Hull lever (ringed on the map): ${positionWords(s.hullLeverLat, s.hullLeverLon)}${lines.length === 0 ? '' : html`, ${lines.length === 1 ? 'line' : 'lines'} <span data-field="hull_lever_lines">${listed}</span>`}
+    </p>`;
+  }
+
   override render() {
     const s = this.view?.slices[this.slice];
     if (this.view === undefined || s === undefined) return nothing;
@@ -44,7 +61,10 @@ export class DgSliceSummary extends LitElement {
         <dt>Hull area, km²</dt><dd data-field="hull_km2">${number(s.hullKm2)}</dd>
         <dt>Spanning tree, km</dt><dd data-field="mst_km">${number(s.mstKm)}</dd>
         <dt>Latitude span, °</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
+        <dt>Hull without its lever, km²</dt><dd data-field="hull_without_km2">${number(s.hullWithoutKm2)}</dd>
+        <dt>Span without one place, °</dt><dd data-field="span_without_deg">${number(s.spanWithoutDeg, 1)}</dd>
       </dl>
+      ${this.renderLever()}
       ${cautions.length === 0 ? nothing : html`<ul aria-label="Cautions">${cautions.map((c) => html`<li>${c}</li>`)}</ul>`}`;
   }
 }

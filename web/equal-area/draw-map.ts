@@ -1,8 +1,8 @@
 /**
  * Draws one slice of the map onto a 2D canvas context, back to front: sphere, graticule, base
- * polygons, occupied cells, spanning tree, hull, places, indicator sites, sphere outline. The
- * projected pieces come from a ProjectedView; the frame places them on the canvas. Line widths
- * and dot sizes are in CSS pixels whatever the frame's scale.
+ * polygons, occupied cells, spanning tree, hull, places, indicator sites, the hull lever's ring,
+ * sphere outline. The projected pieces come from a ProjectedView; the frame places them on the
+ * canvas. Line widths and dot sizes are in CSS pixels whatever the frame's scale.
  */
 import { OVERLAY_COLOURS, rgbCss } from '../colour/layer-colours';
 import type { CountScale } from '../colour/measure-scale';
@@ -13,6 +13,7 @@ import { indicatorColour } from './map-legend';
 import type { MapFrame } from './map-frame';
 import { MAP_STYLE, treeWidth } from './map-style';
 import { hasSlice } from './has-slice';
+import { projectPointsInto } from './project-points';
 import type { ProjectedView } from './projected-view';
 
 /** More places than this in a slice are drawn as pixels (see drawPlaces). */
@@ -58,6 +59,7 @@ export function drawMap(ctx: Canvas2D, projected: ProjectedView, picture: MapPic
     ctx.setTransform(1, 0, 0, 1, 0, 0);
     if (layers.points) drawPlaces(ctx, projected, view, slice, frame, pixelRatio, dots);
     if (layers.indicators) drawIndicators(ctx, projected, view, slice, frame, pixelRatio);
+    if (layers.hull) drawLever(ctx, projected, view, slice, frame, pixelRatio);
     ctx.setTransform(pixelRatio * frame.k, 0, 0, pixelRatio * frame.k, pixelRatio * frame.tx, pixelRatio * frame.ty);
   }
   strokePath(ctx, projected.sphere, MAP_STYLE.outline, MAP_STYLE.outlineWidth * unit);
@@ -107,6 +109,20 @@ function drawPlaces(ctx: Canvas2D, projected: ProjectedView, view: AnalysisView,
     ctx.rect(Math.round(k * x + tx), Math.round(k * xy[2 * i + 1] + ty), side, side);
   }
   ctx.fill();
+}
+
+/** A ring around the slice's hull lever, in the hull's colour; nothing when hidden by the clip. */
+function drawLever(ctx: Canvas2D, projected: ProjectedView, view: AnalysisView, slice: number, frame: MapFrame, pixelRatio: number): void {
+  const { hullLeverLat: lat, hullLeverLon: lon } = view.slices[slice];
+  if (Number.isNaN(lat)) return;
+  const xy = new Float32Array(2);
+  if (projectPointsInto(projected.reference.projection, [lon], [lat], 0, 1, xy) === 0) return;
+  const k = frame.k * pixelRatio;
+  ctx.beginPath();
+  ctx.arc(k * xy[0] + frame.tx * pixelRatio, k * xy[1] + frame.ty * pixelRatio, MAP_STYLE.leverRadius * pixelRatio, 0, 2 * Math.PI);
+  ctx.strokeStyle = rgbCss(OVERLAY_COLOURS.hull);
+  ctx.lineWidth = MAP_STYLE.leverRingWidth * pixelRatio;
+  ctx.stroke();
 }
 
 /** Indicator sites as dots ringed in white, one pass per kind so each kind is one path. */

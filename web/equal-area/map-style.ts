@@ -9,6 +9,9 @@ export const MAP_STYLE = {
   /** Same-colour outline on each cell, covering anti-aliasing seams between neighbours. */
   seamWidth: 0.5,
   hullWidth: 2,
+  /** Ring around the hull lever, the place whose removal shrinks the hull most. */
+  leverRadius: 7,
+  leverRingWidth: 2,
   treeWidth: 1.25,
   /** Trees with more edges than this are drawn one device pixel wide (see treeWidth). */
   thinTreeEdges: 2000,

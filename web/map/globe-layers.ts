@@ -43,6 +43,8 @@ const SITE_EDGE: Color = [255, 255, 255];
 const POINT_RADIUS_PX = 1.8;
 const SITE_RADIUS_PX = 4;
 const SITE_EDGE_PX = 1;
+const LEVER_RADIUS_PX = 7;
+const LEVER_RING_PX = 2;
 
 export function cellLayerId(generation: number, slice: number): string {
   return `${CELL_LAYER_PREFIX}-g${generation}-s${slice}`;
@@ -72,6 +74,10 @@ export function sliceLayers(data: SliceLayerData, options: SliceLayerOptions): L
   out.push(new PathLayer<null>({
     id: `tree-${tag}`, data: data.spanningTree, visible: current && on.spanningTree, modelMatrix: data.lifts.spanningTree, parameters: PARAMETERS,
     getColor: TREE, widthUnits: 'pixels', getWidth: 2, capRounded: true,
+  }));
+  out.push(new ScatterplotLayer<null>({
+    id: `lever-${tag}`, data: data.lever, visible: current && on.hull, parameters: BILLBOARD_PARAMETERS, extensions: [HORIZON_CULL],
+    radiusUnits: 'pixels', getRadius: LEVER_RADIUS_PX, filled: false, stroked: true, getLineColor: HULL, lineWidthUnits: 'pixels', getLineWidth: LEVER_RING_PX,
   }));
   if (data.indicators) {
     out.push(new ScatterplotLayer<null>({

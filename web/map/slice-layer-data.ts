@@ -50,6 +50,8 @@ export interface SliceLayerData {
   /** Paths with getPath. */
   readonly hull: BinaryData;
   readonly spanningTree: BinaryData;
+  /** The slice's hull lever (none or one place) with getPosition. */
+  readonly lever: BinaryData;
   /** Sites with getPosition and getFillColor, when the view has indicators. */
   readonly indicators: BinaryData | undefined;
   /** Base polygons reconstructed to the slice, when the view has them. */
@@ -60,6 +62,12 @@ function pathData(paths: AnalysisView['hulls'], slice: number): { data: BinaryDa
   const { length, startIndices, positions, maxStepDeg } = slicePaths(paths, slice);
   // A chord of angle s lies within the cap of radius s/2 about its midpoint.
   return { data: { length, startIndices, attributes: { getPath: { value: positions, size: 2 } } }, lift: liftMatrix(liftForCapMetres(maxStepDeg / 2)) };
+}
+
+function leverData(view: AnalysisView, slice: number): BinaryData {
+  const { hullLeverLat: lat, hullLeverLon: lon } = view.slices[slice];
+  const position = Number.isNaN(lat) ? new Float32Array(0) : Float32Array.of(lon, lat);
+  return { length: position.length / 2, attributes: { getPosition: { value: position, size: 2 } } };
 }
 
 export function prepareSliceLayerData(view: AnalysisView, slice: number, measure: Measure, scale: CountScale): SliceLayerData {
@@ -99,6 +107,7 @@ export function prepareSliceLayerData(view: AnalysisView, slice: number, measure
     points,
     hull: hull.data,
     spanningTree: spanningTree.data,
+    lever: leverData(view, slice),
     indicators,
     polygons: view.basePolygons?.[slice],
   };

@@ -29,7 +29,12 @@ function coordinate(deg: number, positive: string, negative: string): string {
   return `${text}°${letter}`;
 }
 
-/** "centre 12.3° N, 45.6° W": latitude first, each with its hemisphere, so neither can be mistaken for the other. */
+/** "12.3° N, 45.6° W": latitude first, each with its hemisphere, so neither can be mistaken for the other. */
+export function positionWords(latDeg: number, lonDeg: number): string {
+  return `${coordinate(latDeg, 'N', 'S')}, ${coordinate(lonDeg, 'E', 'W')}`;
+}
+
+/** "centre 12.3° N, 45.6° W". */
 export function cellCentre(latDeg: number, lonDeg: number): string {
-  return `centre ${coordinate(latDeg, 'N', 'S')}, ${coordinate(lonDeg, 'E', 'W')}`;
+  return `centre ${positionWords(latDeg, lonDeg)}`;
 }

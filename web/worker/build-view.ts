@@ -10,9 +10,9 @@ import { latitudeHistogram } from '../../src/footprint/latitude-histogram';
 import type { EqualAreaGrid } from '../../src/grid';
 import { reconstructFeaturesAt, type PlateFeature } from '../../src/placement';
 import type { RotationModel } from '../../src/rotation';
-import { appendGreatCircleArc, EARTH_RADIUS_KM } from '../../src/sphere';
+import { appendGreatCircleArc, EARTH_RADIUS_KM, samePosition } from '../../src/sphere';
 import { chartScale, sliceOfAge, type TimeScale } from '../../src/time';
-import type { AnalysisView, CellEntries, CellShapes, FrameSettings, IndicatorPoints, PathSet, PointSet } from '../protocol';
+import type { AnalysisView, CellEntries, CellShapes, FrameSettings, IndicatorPoints, LeverRows, PathSet, PointSet } from '../protocol';
 
 /** Longest drawn step along hull and tree edges, degrees. */
 const PATH_STEP_DEG = 1;
@@ -35,6 +35,8 @@ export interface ViewInputs {
   readonly scale: TimeScale;
   readonly grid: EqualAreaGrid;
   readonly result: AnalysisResult;
+  /** Line in the source file of each table row (OccurrenceTable.line). */
+  readonly lines: Uint32Array;
   readonly indicators?: IndicatorAnalysis;
   readonly polygons?: { readonly features: readonly PlateFeature[]; readonly model: RotationModel };
 }
@@ -64,6 +66,7 @@ export function buildView(inputs: ViewInputs): { view: AnalysisView; transfer: A
     shapes,
     hulls: hullPaths(result),
     spanningTrees: treePaths(result),
+    leverRows: leverRows(result, inputs.lines),
     latitude: {
       ...latitude,
       ...(indicatorLatitude === undefined ? {} : { indicatorsPerSlice: indicatorLatitude.perSlice, indicatorsTotal: indicatorLatitude.total }),
@@ -79,7 +82,7 @@ function transferables(view: AnalysisView): ArrayBuffer[] {
   const arrays: ArrayBufferView[] = [
     view.positions.sliceStart, view.positions.lon, view.positions.lat,
     ...Object.values(view.cells), ...Object.values(view.shapes),
-    ...Object.values(view.hulls), ...Object.values(view.spanningTrees),
+    ...Object.values(view.hulls), ...Object.values(view.spanningTrees), view.leverRows.sliceStart, view.leverRows.line,
     view.latitude.perSlice, view.latitude.total,
   ];
   if (view.latitude.indicatorsPerSlice !== undefined) arrays.push(view.latitude.indicatorsPerSlice);
@@ -191,6 +194,24 @@ function treePaths({ places: { lat, lon }, shapes }: AnalysisResult): PathSet {
     paths.endSlice();
   }
   return paths.finish();
+}
+
+/** The lines of the rows placed at each slice's hull lever (the place itself is in slices[s]). */
+function leverRows(result: AnalysisResult, lines: Uint32Array): LeverRows {
+  const { order, start } = result.rowsBySlice;
+  const sliceStart = new Uint32Array(result.slices.length + 1);
+  const found: number[] = [];
+  result.slices.forEach((metrics, s) => {
+    const { hullLeverLat: lat, hullLeverLon: lon } = metrics;
+    if (!Number.isNaN(lat)) {
+      for (let k = start[s]; k < start[s + 1]; k++) {
+        const row = order[k];
+        if (samePosition(result.palaeoLat[row], result.palaeoLon[row], lat, lon)) found.push(lines[row]);
+      }
+    }
+    sliceStart[s + 1] = found.length;
+  });
+  return { sliceStart, line: Uint32Array.from(found) };
 }
 
 function indicatorPoints(indicators: IndicatorAnalysis, sliceCount: number): IndicatorPoints {

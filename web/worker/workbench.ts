@@ -60,7 +60,7 @@ export class Workbench {
     this.current = { settings, scale, grid, model, result };
     const polygons = this.extraInput('polygons');
     return buildView({
-      settings, scale, grid, result,
+      settings, scale, grid, result, lines: table.read.table.line,
       indicators: this.indicators(core),
       ...(polygons === undefined || model === undefined ? {} : { polygons: { features: polygons.features as readonly PlateFeature[], model } }),
     });
