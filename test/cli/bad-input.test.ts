@@ -48,7 +48,7 @@ describe('options that cannot be used', () => {
   const table = 'test/fixtures/good/synonym-headers.csv';
   it.each([
     [['coverage'], /needs an occurrence table/],
-    [['coverage', table, '--grid', 'hexes:3'], /Unknown grid "hexes:3": expected healpix:NSIDE/],
+    [['coverage', table, '--grid', 'hexes:3'], /--grid "hexes:3": expected healpix:NSIDE/],
     [['coverage', table, '--grid', 'healpix:33'], /power of two/],
     [['coverage', table, '--bins', 'equal:-5'], /equal/],
     [['coverage', table, '--assign', 'overlap:1.5'], /overlap/],

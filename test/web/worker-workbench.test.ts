@@ -5,7 +5,8 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_SETTINGS, type AnalysisView } from '../../web/protocol';
+import { DEFAULT_RUN_SETTINGS } from '../../src/run';
+import type { AnalysisView } from '../../web/protocol';
 import { readExtra, readOccurrenceTable } from '../../web/worker/read-inputs';
 import { Workbench } from '../../web/worker/workbench';
 import { runCli } from '../cli/run-cli';
@@ -27,7 +28,7 @@ describe('the analysis worker', () => {
   it('writes slices.csv, cells.csv and rejects.csv exactly as the command line does for the same settings', async () => {
     const table = `${DEMO}/occurrences-with-problems.csv`;
     const bench = await demoWorkbench(table);
-    bench.analyse({ ...DEFAULT_SETTINGS, grid: 'healpix:16', bins: 'epochs' });
+    bench.analyse({ ...DEFAULT_RUN_SETTINGS, grid: { kind: 'healpix', nside: 16 }, bins: { kind: 'chart', rank: 'epochs' } });
     const out = mkdtempSync(join(tmpdir(), 'dg-worker-'));
     const run = await runCli('coverage', table, '--bins', 'epochs', '--grid', 'healpix:16', '--rotation', `${DEMO}/poles.csv`, '--out', out, '--quiet');
     expect(run.status).toBe(0);
@@ -46,7 +47,7 @@ describe('the analysis worker', () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
     bench.setExtra(await readExtra('polygons', source(`${DEMO}/land.geojson`)));
     bench.setExtra(await readExtra('indicators', source(`${DEMO}/indicators.csv`)));
-    const { view, transfer } = bench.analyse(DEFAULT_SETTINGS);
+    const { view, transfer } = bench.analyse(DEFAULT_RUN_SETTINGS);
     const n = view.slices.length;
     expect(new Set(transfer).size).toBe(transfer.length);
     expect(view.periods[view.slices.findIndex((s) => s.name === 'Campanian')]).toBe('Cretaceous');
@@ -73,7 +74,7 @@ describe('the analysis worker', () => {
 
   it('lists the taxa of one cell from the rows in it', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
-    const { view } = bench.analyse(DEFAULT_SETTINGS);
+    const { view } = bench.analyse(DEFAULT_RUN_SETTINGS);
     const s = view.slices.findIndex((x) => x.occurrences > 0);
     const entry = view.cells.sliceStart[s];
     const taxa = bench.cellTaxa(s, view.cells.cell[entry]);
