@@ -5,7 +5,7 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_RUN_SETTINGS } from '../../src/run';
+import { DEFAULT_RUN_SETTINGS, type RunSettings } from '../../src/run';
 import type { AnalysisView } from '../../web/protocol';
 import { readExtra, readOccurrenceTable } from '../../web/worker/read-inputs';
 import { Workbench } from '../../web/worker/workbench';
@@ -32,7 +32,7 @@ describe('the analysis worker', () => {
     const out = mkdtempSync(join(tmpdir(), 'dg-worker-'));
     const run = await runCli('coverage', table, '--bins', 'epochs', '--grid', 'healpix:16', '--rotation', `${DEMO}/poles.csv`, '--out', out, '--quiet');
     expect(run.status).toBe(0);
-    for (const file of ['slices.csv', 'cells.csv', 'rejects.csv'] as const) {
+    for (const file of ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv'] as const) {
       const { bytes } = await bench.exportFile(file);
       expect(text(bytes), file).toBe(readFileSync(join(out, file), 'utf8'));
     }
@@ -41,6 +41,16 @@ describe('the analysis worker', () => {
     expect(session.settings).toEqual(cliSession.settings);
     expect(session.inputs.occurrences.sha256).toBe(cliSession.inputs.occurrences.sha256);
     expect(session.summary).toEqual(cliSession.summary);
+    expect(session.tool).toEqual(cliSession.tool);
+  });
+
+  it('refuses settings in a message as a session file refuses them, naming the request', async () => {
+    const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
+    const bad = { ...DEFAULT_RUN_SETTINGS, rotateAt: 'sideways', grid: { kind: 'healpix', nside: 33 } } as unknown as RunSettings;
+    expect(() => bench.analyse(bad)).toThrow([
+      'the analysis request, settings.grid "healpix:33": expected healpix:NSIDE (NSIDE a power of two, 1–8192) or bands:DEG (0 < DEG <= 90)',
+      'the analysis request, settings.rotateAt "sideways": expected slice or occurrence',
+    ].join('\n'));
   });
 
   it('hands the views per-slice data that agrees with the slice numbers', async () => {
