@@ -1,11 +1,11 @@
 export type { AssignChoice } from './assign-choice';
-export { ASSIGN_EXPECTED, assignChoiceOf, assignRuleOf, assignText } from './assign-choice';
+export { assignChoiceOf, assignRuleOf, assignText } from './assign-choice';
 export type { BinsChoice } from './bins-choice';
-export { BINS_EXPECTED, binsChoiceOf, binsText, namesBuiltInBins } from './bins-choice';
+export { binsChoiceOf, binsText, namesBuiltInBins } from './bins-choice';
 export type { GridChoice } from './grid-choice';
-export { GRID_EXPECTED, gridChoiceOf, gridOf, gridText } from './grid-choice';
+export { gridChoiceOf, gridText } from './grid-choice';
 export type { RunSettingName, RunSettings } from './run-settings';
-export { DEFAULT_RUN_SETTINGS, RUN_SETTING_NAMES } from './run-settings';
+export { DEFAULT_RUN_SETTINGS } from './run-settings';
 export type { SettingsSource } from './parse-run-settings';
 export { parseRunSettings } from './parse-run-settings';
 export { settingsText } from './settings-text';
