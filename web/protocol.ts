@@ -4,25 +4,8 @@
  */
 import type { FeatureCollection } from 'geojson';
 import type { SliceMetrics } from '../src/analysis';
+import type { ExportFile, RunSettings } from '../src/run';
 import type { RejectedRow } from '../src/table/occurrence-table';
-
-/** Every setting that shapes the numbers (the same as the command line's options). */
-export interface FrameSettings {
-  /** `periods`, `epochs`, `stages`, `equal:<Myr>`, or `file` for a loaded bins table. */
-  readonly bins: string;
-  /** `midpoint`, `within`, `overlap:<fraction>` or `random`. */
-  readonly assign: string;
-  readonly seed: number;
-  /** `healpix:<nside>` or `bands:<degrees>`. */
-  readonly grid: string;
-  readonly rotateAt: 'slice' | 'occurrence';
-  readonly preferModel: boolean;
-  readonly beyondModel: 'reject' | 'clamp';
-}
-
-export const DEFAULT_SETTINGS: FrameSettings = {
-  bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
-};
 
 /** What colours the occupied cells. */
 export const MEASURES = ['occurrences', 'collections', 'taxa'] as const;
@@ -36,16 +19,15 @@ export type Source =
   | { readonly kind: 'file'; readonly file: File }
   | { readonly kind: 'url'; readonly url: string; readonly name: string };
 
-/** Files the worker writes on request (the command line's set). */
-export const EXPORT_FILES = ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv', 'session.json'] as const;
-export type ExportFile = (typeof EXPORT_FILES)[number];
+/** Files the worker writes on request: the command line's set (src/run). */
+export { EXPORT_FILES, type ExportFile } from '../src/run';
 
 export type Request =
   | { readonly type: 'preview'; readonly id: number; readonly source: Source }
   | { readonly type: 'load-table'; readonly id: number; readonly source: Source; readonly mapping: Readonly<Record<string, string>> }
   | { readonly type: 'load-extra'; readonly id: number; readonly role: ExtraRole; readonly source: Source }
   | { readonly type: 'unload-extra'; readonly id: number; readonly role: ExtraRole }
-  | { readonly type: 'analyse'; readonly id: number; readonly settings: FrameSettings }
+  | { readonly type: 'analyse'; readonly id: number; readonly settings: RunSettings }
   | { readonly type: 'cell-taxa'; readonly id: number; readonly slice: number; readonly cell: number }
   | { readonly type: 'export'; readonly id: number; readonly file: ExportFile }
   | { readonly type: 'cancel'; readonly id: number };
@@ -157,7 +139,7 @@ export interface LatitudeCounts {
 
 /** Everything the views draw, for every slice of one analysis. */
 export interface AnalysisView {
-  readonly settings: FrameSettings;
+  readonly settings: RunSettings;
   readonly gridName: string;
   readonly cellAreaKm2: number;
   /** One per slice, oldest first (the same numbers as slices.csv). */

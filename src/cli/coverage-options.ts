@@ -1,28 +1,21 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
-import { ROTATE_AT, type RotateAt } from '../placement';
-import { BEYOND_MODEL, type BeyondModel } from '../rotation';
-import { parseBeyondModel, parseMap, parseRotateAt, parseSeed, SHARED_OPTIONS, usageError } from './option-values';
+import type { RunSettings } from '../run';
+import { settingsFromOptions, SHARED_OPTIONS, usageError } from './option-values';
 
 export interface CoverageOptions {
   readonly input: string | undefined;
-  readonly bins: string;
-  readonly assign: string;
-  readonly seed: number;
-  readonly grid: string;
-  readonly map: Record<string, string>;
+  readonly settings: RunSettings;
+  /** The user's bins table, when `--bins` names a file. */
+  readonly binsFile: string | undefined;
   /** Pole table of the rotation model. */
   readonly rotation: string | undefined;
-  readonly rotateAt: RotateAt;
-  readonly preferModel: boolean;
-  readonly beyondModel: BeyondModel;
   readonly out: string;
   readonly session: string | undefined;
   readonly quiet: boolean;
 }
 
-export const COVERAGE_DEFAULTS = {
-  bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', out: 'results', rotateAt: ROTATE_AT.slice, beyondModel: BEYOND_MODEL.reject,
-} as const;
+/** Results folder when --out is not given. */
+export const DEFAULT_OUT = 'results';
 
 /** Options that a session file fixes; giving them beside --session would be ambiguous. */
 const SESSION_FIXED = ['bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rotate-at', 'prefer-model', 'beyond-model'] as const;
@@ -58,16 +51,9 @@ export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
   }
   return {
     input: positionals[0],
-    bins: values.bins ?? COVERAGE_DEFAULTS.bins,
-    assign: values.assign ?? COVERAGE_DEFAULTS.assign,
-    seed: values.seed === undefined ? COVERAGE_DEFAULTS.seed : parseSeed(values.seed),
-    grid: values.grid ?? COVERAGE_DEFAULTS.grid,
-    map: parseMap(values.map ?? []),
+    ...settingsFromOptions(values),
     rotation: values.rotation,
-    rotateAt: values['rotate-at'] === undefined ? COVERAGE_DEFAULTS.rotateAt : parseRotateAt(values['rotate-at']),
-    preferModel: values['prefer-model'] ?? false,
-    beyondModel: values['beyond-model'] === undefined ? COVERAGE_DEFAULTS.beyondModel : parseBeyondModel(values['beyond-model']),
-    out: values.out ?? COVERAGE_DEFAULTS.out,
+    out: values.out ?? DEFAULT_OUT,
     session: values.session,
     quiet: values.quiet ?? false,
   };

@@ -1,7 +1,7 @@
 import { runCoverage } from './coverage-command';
 import { runReconstruct } from './reconstruct-command';
 import { HELP } from './help';
-import { TOOL_VERSION } from './version';
+import { TOOL_VERSION } from '../version';
 
 /**
  * The `driftgrid` command. Returns the exit status: 0 done, 1 the input or the options were not

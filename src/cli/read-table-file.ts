@@ -1,7 +1,8 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
+import { readRawRecords as readRawRecordsOf, readRecords, scanRecords, type TextRecords, type TextSource } from '../run';
 import {
-  InvalidUtf8Error, LineCounter, StrictTextDecoder, TableReadError, createCsvScanner, createOccurrenceReader, detach, recordFields,
+  InvalidUtf8Error, LineCounter, StrictTextDecoder, TableReadError, createOccurrenceReader,
   type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
@@ -34,30 +35,14 @@ export async function readTableFile(path: string, options: ReadTableFileOptions)
   return reader.end();
 }
 
-/** The records of a small CSV/TSV file (bins, poles…) as strings; blank lines are counted, not kept. */
-export interface TextRecords {
-  readonly header: readonly string[];
-  readonly records: ReadonlyArray<{ readonly line: number; readonly fields: readonly string[] }>;
-  readonly blankLines: number;
+/** A file's text as a TextSource, with readTableFile's checks (UTF-8 only, read-only). */
+export function fileText(path: string, options: StreamOptions = {}): TextSource {
+  return (push) => streamText(path, push, options);
 }
 
-/** Reads every record of a CSV/TSV file with the same checks as readTableFile (for small tables). */
-export async function readRecordsFile(path: string, options: StreamOptions = {}): Promise<TextRecords> {
-  let header: string[] | undefined;
-  const records: Array<{ line: number; fields: string[] }> = [];
-  let blankLines = 0;
-  const scanner = createCsvScanner({
-    onRecord: (r) => {
-      if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
-      if (r.count === 1 && r.end[0] === r.start[0] && r.raw.length === 0) blankLines++;
-      else if (header === undefined) header = recordFields(r);
-      else records.push({ line: r.line, fields: recordFields(r) });
-    },
-  });
-  await streamText(path, (text) => scanner.push(text), options);
-  scanner.end();
-  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
-  return { header, records, blankLines };
+/** Every record of a small CSV/TSV file (bins, poles…); see readRecords. */
+export function readRecordsFile(path: string, options: StreamOptions = {}): Promise<TextRecords> {
+  return readRecords(fileText(path, options));
 }
 
 /** A user's bin table (`name, base_ma, top_ma`) read from a file; see binsFromRecords. */
@@ -66,28 +51,16 @@ export async function readBinsFile(path: string): Promise<TimeScale> {
   return binsFromRecords(header, records, path);
 }
 
-/**
- * The text of the records starting on the given lines, read again from the file (without their
- * line endings), for reporting rows that a later step could not use.
- */
-export async function readRawRecords(path: string, lines: ReadonlySet<number>): Promise<Map<number, string>> {
-  const found = new Map<number, string>();
-  await scanRecordsFile(path, (r) => {
-    if (lines.has(r.line)) found.set(r.line, detach(r.raw));
-  });
-  return found;
+/** The text of the records starting on the given lines of a file; see readRawRecords in src/run. */
+export function readRawRecords(path: string, lines: ReadonlySet<number>): Promise<Map<number, string>> {
+  return readRawRecordsOf(fileText(path), lines);
 }
 
-/**
- * Streams every record of a file (header and blank lines included) through `onRecord`, with the
- * checks of readTableFile; `delimiter` fixes the delimiter (else the header line decides).
- */
-export async function scanRecordsFile(
+/** Every record of a file (header and blank lines included) through `onRecord`; see scanRecords in src/run. */
+export function scanRecordsFile(
   path: string, onRecord: (record: ScannedRecord) => void, options: StreamOptions & { readonly delimiter?: Delimiter } = {},
 ): Promise<void> {
-  const scanner = createCsvScanner({ onRecord, delimiter: options.delimiter });
-  await streamText(path, (text) => scanner.push(text), options);
-  scanner.end();
+  return scanRecords(fileText(path, options), onRecord, options.delimiter);
 }
 
 /** Streams a file's text, chunk by chunk, refusing what is not UTF-8 text. */

@@ -1,8 +1,8 @@
 import { stat } from 'node:fs/promises';
 import type { RotationModel } from '../rotation';
+import { binsText } from '../run';
 import { parseBinsOption } from '../time';
 import type { TimeScale } from '../time/time-scale';
-import { BIN_KEYWORDS } from './coverage-command';
 import { readRotationFile } from './read-rotation-file';
 import { readBinsFile } from './read-table-file';
 import { RECONSTRUCT_INPUT, parseReconstructOptions, type ReconstructOptions } from './reconstruct-options';
@@ -27,13 +27,13 @@ export async function runReconstruct(args: readonly string[]): Promise<number> {
   await stat(options.input).catch((error: unknown) => {
     throw new Error(`${options.input}: cannot read it: ${error instanceof Error ? error.message : String(error)}`);
   });
-  const binsFile = BIN_KEYWORDS.test(options.bins) ? undefined : options.bins;
+  const { binsFile, settings } = options;
   const userScale = binsFile === undefined ? undefined : await readBinsFile(binsFile);
-  const model = await readRotationFile(options.rotation, options.beyondModel);
+  const model = await readRotationFile(options.rotation, settings.beyondModel);
   const context: ReconstructContext = {
     options,
     model,
-    scaleFor: (oldestMa) => userScale ?? parseBinsOption(options.bins, oldestMa),
+    scaleFor: (oldestMa) => userScale ?? parseBinsOption(binsText(settings.bins), oldestMa),
     inputs: [options.input, options.rotation, ...(binsFile === undefined ? [] : [binsFile])],
     started,
   };

@@ -1,9 +1,8 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { extname } from 'node:path';
-import type { RotateAt } from '../placement';
-import type { BeyondModel } from '../rotation';
-import { COVERAGE_DEFAULTS } from './coverage-options';
-import { parseBeyondModel, parseMap, parseRotateAt, parseSeed, SHARED_OPTIONS, usageError } from './option-values';
+import type { RunSettings } from '../run';
+import { DEFAULT_OUT } from './coverage-options';
+import { settingsFromOptions, SHARED_OPTIONS, usageError } from './option-values';
 
 /** What reconstruct reads: an occurrence (or site) table, or GeoJSON polygons. */
 export const RECONSTRUCT_INPUT = { table: 'table', geojson: 'geojson' } as const;
@@ -13,12 +12,10 @@ export interface ReconstructOptions {
   readonly input: string;
   readonly kind: ReconstructInput;
   readonly rotation: string;
-  readonly bins: string;
-  readonly assign: string;
-  readonly seed: number;
-  readonly map: Record<string, string>;
-  readonly rotateAt: RotateAt;
-  readonly beyondModel: BeyondModel;
+  /** Bins, assignment, column map, rotateAt and beyondModel (the grid and preferModel do not apply). */
+  readonly settings: RunSettings;
+  /** The user's bins table, when `--bins` names a file. */
+  readonly binsFile: string | undefined;
   readonly singleFile: boolean;
   readonly out: string;
   readonly quiet: boolean;
@@ -56,14 +53,9 @@ export function parseReconstructOptions(args: readonly string[]): ReconstructOpt
     input,
     kind,
     rotation: values.rotation,
-    bins: values.bins ?? COVERAGE_DEFAULTS.bins,
-    assign: values.assign ?? COVERAGE_DEFAULTS.assign,
-    seed: values.seed === undefined ? COVERAGE_DEFAULTS.seed : parseSeed(values.seed),
-    map: parseMap(values.map ?? []),
-    rotateAt: values['rotate-at'] === undefined ? COVERAGE_DEFAULTS.rotateAt : parseRotateAt(values['rotate-at']),
-    beyondModel: values['beyond-model'] === undefined ? COVERAGE_DEFAULTS.beyondModel : parseBeyondModel(values['beyond-model']),
+    ...settingsFromOptions(values),
     singleFile: values['single-file'] ?? false,
-    out: values.out ?? COVERAGE_DEFAULTS.out,
+    out: values.out ?? DEFAULT_OUT,
     quiet: values.quiet ?? false,
   };
 }

@@ -6,7 +6,8 @@ import { PLACEMENT_COLUMNS, placementFields } from '../export/placement-fields';
 import { rejectsCsv } from '../export/rejects-csv';
 import { collectExclusions, exclusionStatus, EXCLUSION_REASONS, placeOccurrences, ROTATE_AT, type Placement } from '../placement';
 import { normaliseHeader, type Delimiter, type OccurrenceTable } from '../table/index';
-import { assignSlices, findChartInterval, parseAssignRule } from '../time';
+import { assignRuleOf, isBlankRecord } from '../run';
+import { assignSlices, findChartInterval } from '../time';
 import { oldestAge } from '../table/oldest-age';
 import { excludedRowsOfFile } from './excluded-rows';
 import { readTableFile, scanRecordsFile } from './read-table-file';
@@ -25,16 +26,16 @@ const FLUSH_CHARS = 1 << 20;
 export async function reconstructTable(context: ReconstructContext): Promise<void> {
   const { options, model } = context;
   const { input } = options;
-  const read = await readTableFile(input, { mapping: options.map, resolveInterval: findChartInterval }).catch((error: unknown) => {
+  const read = await readTableFile(input, { mapping: options.settings.map, resolveInterval: findChartInterval }).catch((error: unknown) => {
     throw new Error(`${input}: ${error instanceof Error ? error.message : String(error)}`);
   });
   refuseClash(read.columns.header, input);
   const { table } = read;
   const scale = context.scaleFor(oldestAge(table));
-  const assignment = assignSlices(table.maxMa, table.minMa, scale, parseAssignRule(options.assign, options.seed));
-  const placement = placeOccurrences(table, assignment, scale, model, { rotateAt: options.rotateAt, preferModel: false, modelOnly: true });
+  const assignment = assignSlices(table.maxMa, table.minMa, scale, assignRuleOf(options.settings.assign, options.settings.seed));
+  const placement = placeOccurrences(table, assignment, scale, model, { rotateAt: options.settings.rotateAt, preferModel: false, modelOnly: true });
   const exclusions = collectExclusions(assignment, placement, assignment.slice);
-  const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, table, exclusions, placement, model, options.rotateAt))];
+  const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, table, exclusions, placement, model, options.settings.rotateAt))];
 
   const extension = extname(input);
   const [tablePath, rejectsPath] = await prepareTargets(options.out, [`${basename(input, extension)}-reconstructed${extension}`, 'rejects.csv'], context.inputs);
@@ -44,7 +45,7 @@ export async function reconstructTable(context: ReconstructContext): Promise<voi
   const n = (value: number) => value.toLocaleString('en');
   const out = [`rows read: ${n(read.rowsRead)}; accepted: ${n(table.count)}; rejected on reading: ${n(read.rejects.length)}`];
   for (const [field, count] of countBy(read.rejects.map((r) => r.field))) out.push(`  rejected for ${field}: ${n(count)}`);
-  const at = options.rotateAt === ROTATE_AT.slice ? "each slice's mid-age" : "each row's own age";
+  const at = options.settings.rotateAt === ROTATE_AT.slice ? "each slice's mid-age" : "each row's own age";
   out.push(`reconstructed with ${model.source} at ${at}: ${n(placement.fromModel)}${placement.clamped > 0 ? ` (${n(placement.clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`);
   for (const [reason, count] of countBy(Array.from(exclusions.reasons, (r) => `${exclusionStatus(r) === undefined ? 'not in any slice' : 'not placed'}, ${EXCLUSION_REASONS[r]}`))) {
     out.push(`  ${reason}: ${n(count)}`);
@@ -95,7 +96,7 @@ async function writeTableBack(input: string, target: string, table: OccurrenceTa
   let header = true;
   let row = 0;
   await scanRecordsFile(input, (r) => {
-    if (r.count === 1 && r.end[0] === r.start[0] && r.raw.length === 0) {
+    if (isBlankRecord(r)) {
       push(eol);
     } else if (header) {
       header = false;

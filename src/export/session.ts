@@ -41,6 +41,9 @@ export interface Session {
   readonly summary: Readonly<Record<string, unknown>>;
 }
 
+/** A session file as read: its settings as written, for parseRunSettings (src/run) to check. */
+export type RecordedSession = Omit<Session, 'settings'> & { readonly settings: Readonly<Record<string, unknown>> };
+
 /** What a run found, as the session file records it. */
 export function sessionSummary(read: { readonly rowsRead: number; readonly accepted: number; readonly rejectedOnReading: number }, result: AnalysisResult): Record<string, unknown> {
   return {
@@ -61,8 +64,11 @@ export function sessionJson(session: Session): string {
   return JSON.stringify(session, null, 2) + '\n';
 }
 
-/** Reads a session file, naming the first field that is missing or of the wrong kind. */
-export function parseSession(text: string, source: string): Session {
+/**
+ * Reads a session file, naming the first field outside the settings that is missing or of the
+ * wrong kind; the settings are left to parseRunSettings (src/run), the one reader of settings.
+ */
+export function parseSession(text: string, source: string): RecordedSession {
   let value: unknown;
   try {
     value = JSON.parse(text);
@@ -76,8 +82,6 @@ export function parseSession(text: string, source: string): Session {
   }
   const inputs = requireObject(root.inputs, source, 'inputs');
   const settings = requireObject(root.settings, source, 'settings');
-  const map = requireObject(settings.map, source, 'settings.map');
-  for (const [field, column] of Object.entries(map)) requireString(column, source, `settings.map.${field}`);
   return {
     format: SESSION_FORMAT,
     formatVersion: root.formatVersion,
@@ -87,16 +91,7 @@ export function parseSession(text: string, source: string): Session {
       ...(inputs.bins === undefined ? {} : { bins: requireInput(inputs.bins, source, 'inputs.bins') }),
       ...(inputs.rotation === undefined ? {} : { rotation: requireInput(inputs.rotation, source, 'inputs.rotation') }),
     },
-    settings: {
-      bins: requireString(settings.bins, source, 'settings.bins'),
-      assign: requireString(settings.assign, source, 'settings.assign'),
-      seed: requireNumber(settings.seed, source, 'settings.seed'),
-      grid: requireString(settings.grid, source, 'settings.grid'),
-      map: map as Record<string, string>,
-      ...(settings.rotateAt === undefined ? {} : { rotateAt: requireString(settings.rotateAt, source, 'settings.rotateAt') }),
-      ...(settings.preferModel === undefined ? {} : { preferModel: requireBoolean(settings.preferModel, source, 'settings.preferModel') }),
-      ...(settings.beyondModel === undefined ? {} : { beyondModel: requireString(settings.beyondModel, source, 'settings.beyondModel') }),
-    },
+    settings,
     summary: root.summary === undefined ? {} : requireObject(root.summary, source, 'summary'),
   };
 }
@@ -122,10 +117,5 @@ function requireString(value: unknown, source: string, field: string): string {
 
 function requireNumber(value: unknown, source: string, field: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) throw new Error(`${source}: field "${field}" should be a number.`);
-  return value;
-}
-
-function requireBoolean(value: unknown, source: string, field: string): boolean {
-  if (typeof value !== 'boolean') throw new Error(`${source}: field "${field}" should be true or false.`);
   return value;
 }

@@ -48,7 +48,7 @@ describe('options that cannot be used', () => {
   const table = 'test/fixtures/good/synonym-headers.csv';
   it.each([
     [['coverage'], /needs an occurrence table/],
-    [['coverage', table, '--grid', 'hexes:3'], /Unknown grid "hexes:3": expected healpix:NSIDE/],
+    [['coverage', table, '--grid', 'hexes:3'], /--grid "hexes:3": expected healpix:NSIDE/],
     [['coverage', table, '--grid', 'healpix:33'], /power of two/],
     [['coverage', table, '--bins', 'equal:-5'], /equal/],
     [['coverage', table, '--assign', 'overlap:1.5'], /overlap/],
@@ -58,6 +58,8 @@ describe('options that cannot be used', () => {
     [['coverage', 'no-such-file.csv'], /no-such-file\.csv/],
     [['spin'], /Unknown command "spin"/],
     [['coverage', '--session', 'x.json', '--grid', 'bands:5'], /--session fixes .* --grid/],
+    // The page refuses this file in the same words (test/e2e/session-refusal.e2e.test.ts).
+    [['coverage', '--session', 'test/e2e/fixtures/session-rotate-sideways.json'], /^driftgrid: test\/e2e\/fixtures\/session-rotate-sideways\.json, settings\.rotateAt "sideways": expected slice or occurrence\n$/],
   ])('%j is refused with a message saying what was expected', async (args, message) => {
     const run = await runCli(...args, '--out', mkdtempSync(join(tmpdir(), 'driftgrid-opt-')));
     expect(run.status).toBe(1);

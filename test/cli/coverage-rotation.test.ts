@@ -172,8 +172,8 @@ describe('rotation options and files that cannot be used', () => {
   });
 
   it.each([
-    [['--rotation', 'assets/demo/poles.csv', '--rotate-at', 'age'], /--rotate-at "age": expected slice or occurrence\./],
-    [['--rotation', 'assets/demo/poles.csv', '--beyond-model', 'ignore'], /--beyond-model "ignore": expected reject or clamp\./],
+    [['--rotation', 'assets/demo/poles.csv', '--rotate-at', 'age'], /--rotate-at "age": expected slice or occurrence$/m],
+    [['--rotation', 'assets/demo/poles.csv', '--beyond-model', 'ignore'], /--beyond-model "ignore": expected reject or clamp$/m],
     [['--prefer-model'], /--prefer-model needs a rotation model: add --rotation <poles\.csv>\./],
     [['--rotate-at', 'slice', '--beyond-model', 'clamp'], /--rotate-at, --beyond-model need a rotation model/],
     [['--rotation', 'no-such-poles.csv'], /no-such-poles\.csv: cannot read no-such-poles\.csv/],

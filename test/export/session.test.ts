@@ -20,8 +20,7 @@ describe('session files', () => {
     ['another kind of file', '{"format":"x"}', /field "format" should be "driftgrid-session"/],
     ['a newer format', JSON.stringify({ ...session, formatVersion: 99 }), /version 99 is not supported/],
     ['a bad digest', JSON.stringify({ ...session, inputs: { occurrences: { path: 'a', sha256: 'xyz', bytes: 1 } } }), /inputs\.occurrences\.sha256/],
-    ['a missing grid', JSON.stringify({ ...session, settings: { ...session.settings, grid: undefined } }), /settings\.grid" should be a string/],
-    ['a seed that is not a number', JSON.stringify({ ...session, settings: { ...session.settings, seed: 'one' } }), /settings\.seed" should be a number/],
+    ['settings that are not an object', JSON.stringify({ ...session, settings: 'stages' }), /field "settings" should be an object/],
   ])('name the field at fault for %s', (_name, text, message) => {
     expect(() => parseSession(text, 's.json')).toThrow(message);
   });

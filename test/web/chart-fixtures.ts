@@ -1,6 +1,7 @@
 /** Small hand-made analyses for the chart tests. */
 import type { SliceMetrics } from '../../src/analysis';
-import { DEFAULT_SETTINGS, type AnalysisView, type LatitudeCounts } from '../../web/protocol';
+import { DEFAULT_RUN_SETTINGS } from '../../src/run';
+import type { AnalysisView, LatitudeCounts } from '../../web/protocol';
 
 /** A slice with the given measures; the footprint fields not given are NaN (no positions). */
 export function slice(name: string, baseMa: number, topMa: number, values: Partial<SliceMetrics> = {}): SliceMetrics {
@@ -18,7 +19,7 @@ const emptyPaths = { sliceStart: new Uint32Array(1), pathStart: new Uint32Array(
 /** A whole AnalysisView around the slices and latitude counts (the map fields empty). */
 export function view(slices: readonly SliceMetrics[], latitude: LatitudeCounts, extra: Partial<AnalysisView> = {}): AnalysisView {
   return {
-    settings: DEFAULT_SETTINGS, gridName: 'healpix:32', cellAreaKm2: 1, slices, periods: slices.map(() => 'Test'),
+    settings: DEFAULT_RUN_SETTINGS, gridName: 'healpix:32', cellAreaKm2: 1, slices, periods: slices.map(() => 'Test'),
     collectionsArePositions: false, excluded: 0, positions: emptyPoints,
     cells: { sliceStart: new Uint32Array(slices.length + 1), cell: new Uint32Array(0), shape: new Uint32Array(0), occurrences: new Uint32Array(0), collections: new Uint32Array(0), taxa: new Uint32Array(0) },
     shapes: { ringStart: new Uint32Array(1), coords: new Float32Array(0), centre: new Float32Array(0) },

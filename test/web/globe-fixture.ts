@@ -3,7 +3,8 @@
 // Nothing here is real data.
 import type { FeatureCollection } from 'geojson';
 import { HealpixGrid } from '../../src/grid';
-import { DEFAULT_SETTINGS, type AnalysisView } from '../../web/protocol';
+import { DEFAULT_RUN_SETTINGS } from '../../src/run';
+import type { AnalysisView } from '../../web/protocol';
 
 export const FIXTURE_GRID = new HealpixGrid(4);
 
@@ -42,7 +43,7 @@ export function fixtureView(): AnalysisView {
     hullLeverLat: Number.NaN, hullLeverLon: Number.NaN, hullWithoutKm2: Number.NaN, spanWithoutDeg: Number.NaN,
   });
   return {
-    settings: DEFAULT_SETTINGS, gridName: FIXTURE_GRID.name, cellAreaKm2: 1, slices: [metrics('A', 3), metrics('B', 2)],
+    settings: DEFAULT_RUN_SETTINGS, gridName: FIXTURE_GRID.name, cellAreaKm2: 1, slices: [metrics('A', 3), metrics('B', 2)],
     periods: ['P', 'P'], collectionsArePositions: false, excluded: 0,
     positions: { sliceStart: Uint32Array.of(0, 3, 4), lon: Float32Array.of(10, 20, 30, -170), lat: Float32Array.of(1, 2, 3, -80) },
     cells: {

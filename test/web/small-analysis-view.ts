@@ -8,7 +8,8 @@ import { measureFootprintWithShapes } from '../../src/footprint/slice-footprint'
 import { parseGridName } from '../../src/grid';
 import { appendGreatCircleArc, convexHull, degreesToUnitVectors, minimumSpanningTree } from '../../src/sphere';
 import { createSeededRandom } from '../../src/time';
-import { DEFAULT_SETTINGS, type AnalysisView, type PathSet } from '../../web/protocol';
+import { parseRunSettings } from '../../src/run';
+import type { AnalysisView, PathSet } from '../../web/protocol';
 
 export interface SliceSpec {
   readonly name: string;
@@ -125,7 +126,7 @@ export function smallView(spec: SmallViewSpec = {}): AnalysisView {
 
   const bands = 18;
   return {
-    settings: { ...DEFAULT_SETTINGS, grid: grid.name },
+    settings: parseRunSettings({ grid: grid.name }, { naming: 'option' }),
     gridName: grid.name,
     cellAreaKm2: grid.cellAreaSr * 6371.0088 ** 2,
     slices: metrics,

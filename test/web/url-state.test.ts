@@ -1,12 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_SETTINGS } from '../../web/protocol';
+import { DEFAULT_RUN_SETTINGS } from '../../src/run';
 import { decodeUrlState, encodeUrlState, type UrlState } from '../../web/state/url-state';
 import { DEFAULT_LAYERS } from '../../web/state/view-options';
 import { matchingSlice, sliceNamed } from '../../web/state/slice-matching';
 import type { SliceMetrics } from '../../src/analysis';
 
 const state: UrlState = {
-  settings: { ...DEFAULT_SETTINGS, bins: 'equal:5', assign: 'random', seed: 42, grid: 'bands:10', rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp' },
+  settings: {
+    ...DEFAULT_RUN_SETTINGS, bins: { kind: 'equal', widthMyr: 5 }, assign: { kind: 'random' }, seed: 42, grid: { kind: 'bands', degrees: 10 },
+    rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp',
+  },
   measure: 'taxa',
   sliceName: 'Late Cretaceous & <b>',
   mapView: 'polar-south',
@@ -25,9 +28,22 @@ describe('the page address', () => {
 
   it('gives the defaults for an empty address', () => {
     const { state: back } = decodeUrlState('');
-    expect(back.settings).toEqual(DEFAULT_SETTINGS);
+    expect(back.settings).toEqual(DEFAULT_RUN_SETTINGS);
     expect(back.layers).toEqual(DEFAULT_LAYERS);
     expect(back.sliceName).toBeUndefined();
+  });
+
+  it('writes the settings as their canonical text, as session files do', () => {
+    const hash = new URLSearchParams(encodeUrlState(state));
+    expect([hash.get('bins'), hash.get('assign'), hash.get('seed'), hash.get('grid')]).toEqual(['equal:5', 'random', '42', 'bands:10']);
+  });
+
+  it('ignores, and names, a setting the settings reader refuses', () => {
+    const { state: back, ignored } = decodeUrlState('#bins=equal:-5&grid=healpix:33&assign=overlap:0.25&seed=x');
+    expect(back.settings.bins).toEqual(DEFAULT_RUN_SETTINGS.bins);
+    expect(back.settings.grid).toEqual(DEFAULT_RUN_SETTINGS.grid);
+    expect(back.settings.assign).toEqual({ kind: 'overlap', fraction: 0.25 });
+    expect([...ignored].sort()).toEqual(['bins=equal:-5', 'grid=healpix:33', 'seed=x']);
   });
 
   it('names what it ignored instead of failing on edited values', () => {

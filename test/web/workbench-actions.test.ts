@@ -74,15 +74,85 @@ describe('changing the bins', () => {
   it('moves to the new slice that holds the old slice mid-age', async () => {
     const stages = [slice('s1', 100, 96, 3), slice('s2', 96, 90, 4), slice('s3', 90, 70, 5)];
     const { worker, store, actions } = setUp({ view: viewOf(stages), slice: 2 });
-    const done = actions.changeSettings({ bins: 'equal:5' });
+    const done = actions.changeSettings({ bins: { kind: 'equal', widthMyr: 5 } });
     await flush();
     const request = worker.last('analyse');
-    expect(request).toMatchObject({ settings: { bins: 'equal:5' } });
+    expect(request).toMatchObject({ settings: { bins: { kind: 'equal', widthMyr: 5 } } });
     const equal = [slice('a', 100, 95, 1), slice('b', 95, 90, 1), slice('c', 90, 85, 1), slice('d', 85, 80, 1)];
     worker.answer({ type: 'analysis', id: request.id, view: viewOf(equal) });
     await done;
     expect(store.state.slice).toBe(3); // s3's mid-age, 80 Ma, lies in d (85–80)
-    expect(store.state.settings.bins).toBe('equal:5');
+    expect(store.state.settings.bins).toEqual({ kind: 'equal', widthMyr: 5 });
     expect(location.hash).toContain('bins=equal%3A5');
+  });
+});
+
+describe('analyses asked for in quick succession', () => {
+  const stages = [slice('s1', 100, 96, 3), slice('s2', 96, 90, 4)];
+  const epochs = [slice('e1', 100, 80, 7)];
+
+  it('apply only the latest answer, and stay busy until the latest call ends', async () => {
+    const { worker, store, actions } = setUp({ view: viewOf(stages) });
+    const first = actions.changeSettings({ seed: 2 });
+    await flush();
+    const firstRequest = worker.last('analyse');
+    const second = actions.changeSettings({ seed: 3 });
+    await flush();
+    const secondRequest = worker.last('analyse');
+    expect(secondRequest.id).not.toBe(firstRequest.id);
+
+    worker.answer({ type: 'analysis', id: firstRequest.id, view: viewOf(epochs) });
+    await first;
+    expect(store.state.view?.slices).toEqual(stages); // the older answer is dropped
+    expect(store.state.busy).toBeDefined(); // the newer call still runs
+    expect(store.state.problem).toBeUndefined();
+
+    worker.answer({ type: 'analysis', id: secondRequest.id, view: viewOf(epochs) });
+    await second;
+    expect(store.state.view?.slices).toEqual(epochs);
+    expect(store.state.settings.seed).toBe(3);
+    expect(store.state.busy).toBeUndefined();
+  });
+
+  it('drop the failure of a call a newer one has replaced', async () => {
+    const { worker, store, actions } = setUp({ view: viewOf(stages) });
+    const first = actions.changeSettings({ seed: 2 });
+    await flush();
+    const firstRequest = worker.last('analyse');
+    const second = actions.changeSettings({ seed: 3 });
+    await flush();
+    worker.answer({ type: 'error', id: firstRequest.id, message: 'too late to matter' });
+    worker.answer({ type: 'analysis', id: worker.last('analyse').id, view: viewOf(epochs) });
+    await Promise.all([first, second]);
+    expect(store.state.problem).toBeUndefined();
+    expect(store.state.view?.slices).toEqual(epochs);
+  });
+});
+
+describe('opening a session file', () => {
+  const sessionFile = (settings: Record<string, unknown>) => new File([JSON.stringify({
+    format: 'driftgrid-session', formatVersion: 2, tool: { name: 'driftgrid', version: '0.1.0' },
+    inputs: { occurrences: { path: 'occurrences.csv', sha256: 'a'.repeat(64), bytes: 10 } },
+    settings: { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: {}, ...settings },
+  })], 'session.json');
+
+  it('refuses an unknown setting in the words of the command line, and asks nothing of the worker', async () => {
+    const { worker, store, actions } = setUp();
+    await actions.openSession(sessionFile({ rotateAt: 'sideways', beyondModel: 'wrap' }));
+    expect(store.state.problem).toBe(
+      'session.json, settings.rotateAt "sideways": expected slice or occurrence\nsession.json, settings.beyondModel "wrap": expected reject or clamp',
+    );
+    expect(worker.requests.filter((r) => r.type === 'analyse')).toEqual([]);
+  });
+
+  it('applies the settings it holds', async () => {
+    const { worker, store, actions } = setUp();
+    const done = actions.openSession(sessionFile({ grid: 'bands:10', rotateAt: 'occurrence' }));
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    const request = worker.last('analyse');
+    expect(request).toMatchObject({ settings: { grid: { kind: 'bands', degrees: 10 }, rotateAt: 'occurrence' } });
+    worker.answer({ type: 'analysis', id: request.id, view: viewOf([slice('s1', 100, 96, 3)]) });
+    await done;
+    expect(store.state.settings.grid).toEqual({ kind: 'bands', degrees: 10 });
   });
 });

@@ -5,7 +5,8 @@ import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_SETTINGS, type AnalysisView } from '../../web/protocol';
+import { DEFAULT_RUN_SETTINGS, type RunSettings } from '../../src/run';
+import type { AnalysisView } from '../../web/protocol';
 import { readExtra, readOccurrenceTable } from '../../web/worker/read-inputs';
 import { Workbench } from '../../web/worker/workbench';
 import { runCli } from '../cli/run-cli';
@@ -27,11 +28,11 @@ describe('the analysis worker', () => {
   it('writes slices.csv, cells.csv and rejects.csv exactly as the command line does for the same settings', async () => {
     const table = `${DEMO}/occurrences-with-problems.csv`;
     const bench = await demoWorkbench(table);
-    bench.analyse({ ...DEFAULT_SETTINGS, grid: 'healpix:16', bins: 'epochs' });
+    bench.analyse({ ...DEFAULT_RUN_SETTINGS, grid: { kind: 'healpix', nside: 16 }, bins: { kind: 'chart', rank: 'epochs' } });
     const out = mkdtempSync(join(tmpdir(), 'dg-worker-'));
     const run = await runCli('coverage', table, '--bins', 'epochs', '--grid', 'healpix:16', '--rotation', `${DEMO}/poles.csv`, '--out', out, '--quiet');
     expect(run.status).toBe(0);
-    for (const file of ['slices.csv', 'cells.csv', 'rejects.csv'] as const) {
+    for (const file of ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv'] as const) {
       const { bytes } = await bench.exportFile(file);
       expect(text(bytes), file).toBe(readFileSync(join(out, file), 'utf8'));
     }
@@ -40,13 +41,23 @@ describe('the analysis worker', () => {
     expect(session.settings).toEqual(cliSession.settings);
     expect(session.inputs.occurrences.sha256).toBe(cliSession.inputs.occurrences.sha256);
     expect(session.summary).toEqual(cliSession.summary);
+    expect(session.tool).toEqual(cliSession.tool);
+  });
+
+  it('refuses settings in a message as a session file refuses them, naming the request', async () => {
+    const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
+    const bad = { ...DEFAULT_RUN_SETTINGS, rotateAt: 'sideways', grid: { kind: 'healpix', nside: 33 } } as unknown as RunSettings;
+    expect(() => bench.analyse(bad)).toThrow([
+      'the analysis request, settings.grid "healpix:33": expected healpix:NSIDE (NSIDE a power of two, 1–8192) or bands:DEG (0 < DEG <= 90)',
+      'the analysis request, settings.rotateAt "sideways": expected slice or occurrence',
+    ].join('\n'));
   });
 
   it('hands the views per-slice data that agrees with the slice numbers', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
     bench.setExtra(await readExtra('polygons', source(`${DEMO}/land.geojson`)));
     bench.setExtra(await readExtra('indicators', source(`${DEMO}/indicators.csv`)));
-    const { view, transfer } = bench.analyse(DEFAULT_SETTINGS);
+    const { view, transfer } = bench.analyse(DEFAULT_RUN_SETTINGS);
     const n = view.slices.length;
     expect(new Set(transfer).size).toBe(transfer.length);
     expect(view.periods[view.slices.findIndex((s) => s.name === 'Campanian')]).toBe('Cretaceous');
@@ -78,7 +89,7 @@ describe('the analysis worker', () => {
     const csv = ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon', ...rows].join('\n');
     const bench = new Workbench();
     bench.setTable(await readOccurrenceTable({ kind: 'file', file: new File([csv], 'lever.csv') }, {}, progress));
-    const { view } = bench.analyse({ ...DEFAULT_SETTINGS, bins: 'equal:10' });
+    const { view } = bench.analyse({ ...DEFAULT_RUN_SETTINGS, bins: { kind: 'equal', widthMyr: 10 } });
     expect(view.slices).toHaveLength(1);
     expect([view.slices[0].hullLeverLat, view.slices[0].hullLeverLon]).toEqual([30, 5]);
     expect(Array.from(view.leverRows.line)).toEqual([5, 8]);
@@ -87,7 +98,7 @@ describe('the analysis worker', () => {
 
   it('lists the taxa of one cell from the rows in it', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
-    const { view } = bench.analyse(DEFAULT_SETTINGS);
+    const { view } = bench.analyse(DEFAULT_RUN_SETTINGS);
     const s = view.slices.findIndex((x) => x.occurrences > 0);
     const entry = view.cells.sliceStart[s];
     const taxa = bench.cellTaxa(s, view.cells.cell[entry]);

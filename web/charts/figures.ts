@@ -1,4 +1,5 @@
 /** The panels' exported figures: standalone SVG documents with a title block, from the same layouts as the screen. */
+import { assignText, binsText } from '../../src/run';
 import type { AnalysisView } from '../protocol';
 import { sliceTitle } from '../text';
 import { curvesLayout } from './curves-layout';
@@ -30,7 +31,7 @@ export function curvesFigure(
   if (view === undefined || view.slices.length === 0) return empty(CURVES_TITLE, width);
   const series = visibleSeries(seriesKeys);
   const slices = range === undefined ? view.slices : view.slices.slice(range.from, range.to + 1);
-  const details = [`bins ${view.settings.bins}`, `assign ${view.settings.assign}`, `grid ${view.gridName}`, `${slices.length} slices`];
+  const details = [`bins ${binsText(view.settings.bins)}`, `assign ${assignText(view.settings.assign)}`, `grid ${view.gridName}`, `${slices.length} slices`];
   const layout = curvesLayout({
     slices, collectionsArePositions: view.collectionsArePositions, series, normalise, width,
     heading: { title: CURVES_TITLE, details },
@@ -46,7 +47,7 @@ export function latitudeFigure(view: AnalysisView | undefined, slice: number, wi
   const s = clampSlice(view, slice);
   const metrics = view.slices[s];
   const kinds = viewIndicatorKinds(view);
-  const details = [sliceTitle(metrics), `${view.latitude.bandDeg}° bands`, `bins ${view.settings.bins}`, `assign ${view.settings.assign}`];
+  const details = [sliceTitle(metrics), `${view.latitude.bandDeg}° bands`, `bins ${binsText(view.settings.bins)}`, `assign ${assignText(view.settings.assign)}`];
   const layout = latitudeLayout({ latitude: view.latitude, slice: s, sliceName: metrics.name, kinds, width, heading: { title: LATITUDE_TITLE, details } });
   const description = latitudeDescription(view.latitude, s, metrics.name, kinds);
   return { text: svgDocument({ width, height: layout.height, title: LATITUDE_TITLE, description, marks: layout.marks }), width, height: layout.height };

@@ -1,6 +1,6 @@
 /** Everything the page shows, in one object (see Store). */
-import type { AnalysisView, ExtraRole, ExtraSummary, FrameSettings, Measure, TablePreview, TableSummary } from '../protocol';
-import { DEFAULT_SETTINGS } from '../protocol';
+import { DEFAULT_RUN_SETTINGS, type RunSettings } from '../../src/run';
+import type { AnalysisView, ExtraRole, ExtraSummary, Measure, TablePreview, TableSummary } from '../protocol';
 import { DEFAULT_LAYERS, type LayerVisibility, type MapView } from './view-options';
 
 export interface Busy {
@@ -38,7 +38,7 @@ export interface AppState {
   readonly table: TableSummary | undefined;
   readonly extras: Readonly<Partial<Record<ExtraRole, ExtraSummary>>>;
   readonly pendingImport: PendingImport | undefined;
-  readonly settings: FrameSettings;
+  readonly settings: RunSettings;
   readonly measure: Measure;
   readonly view: AnalysisView | undefined;
   readonly slice: number;
@@ -61,7 +61,7 @@ export const INITIAL_STATE: AppState = {
   table: undefined,
   extras: {},
   pendingImport: undefined,
-  settings: DEFAULT_SETTINGS,
+  settings: DEFAULT_RUN_SETTINGS,
   measure: 'occurrences',
   view: undefined,
   slice: 0,

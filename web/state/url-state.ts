@@ -3,12 +3,13 @@
  * settings, measure, slice (by name), map view, layers and curves. Unknown or malformed values
  * are ignored in favour of the defaults, and say so through `ignored`.
  */
-import { DEFAULT_SETTINGS, MEASURES, type FrameSettings, type Measure } from '../protocol';
+import { assignText, binsText, DEFAULT_RUN_SETTINGS, gridText, parseRunSettings, type RunSettingName, type RunSettings } from '../../src/run';
+import { MEASURES, type Measure } from '../protocol';
 import { CURVE_SERIES, type CurveSeries } from './app-state';
 import { DEFAULT_LAYERS, MAP_VIEWS, type LayerVisibility, type MapView } from './view-options';
 
 export interface UrlState {
-  readonly settings: FrameSettings;
+  readonly settings: RunSettings;
   readonly measure: Measure;
   readonly sliceName: string | undefined;
   readonly mapView: MapView | undefined;
@@ -23,13 +24,13 @@ const LAYER_KEYS = Object.keys(DEFAULT_LAYERS) as (keyof LayerVisibility)[];
 export function encodeUrlState(state: UrlState): string {
   const p = new URLSearchParams();
   const s = state.settings;
-  p.set('bins', s.bins);
-  p.set('assign', s.assign);
-  if (s.assign === 'random') p.set('seed', String(s.seed));
-  p.set('grid', s.grid);
-  if (s.rotateAt !== DEFAULT_SETTINGS.rotateAt) p.set('rotate-at', s.rotateAt);
+  p.set('bins', binsText(s.bins));
+  p.set('assign', assignText(s.assign));
+  if (s.assign.kind === 'random') p.set('seed', String(s.seed));
+  p.set('grid', gridText(s.grid));
+  if (s.rotateAt !== DEFAULT_RUN_SETTINGS.rotateAt) p.set('rotate-at', s.rotateAt);
   if (s.preferModel) p.set('prefer-model', '1');
-  if (s.beyondModel !== DEFAULT_SETTINGS.beyondModel) p.set('beyond-model', s.beyondModel);
+  if (s.beyondModel !== DEFAULT_RUN_SETTINGS.beyondModel) p.set('beyond-model', s.beyondModel);
   p.set('measure', state.measure);
   if (state.sliceName !== undefined) p.set('slice', state.sliceName);
   if (state.mapView !== undefined) p.set('map', state.mapView);
@@ -51,17 +52,26 @@ export function decodeUrlState(hash: string): { state: UrlState; ignored: string
     return fallback;
   };
   const isText = (v: string): v is string => v.length > 0 && v.length <= 200;
-  const seedText = p.get('seed');
-  const seed = seedText !== null && /^\d{1,9}$/.test(seedText) ? Number(seedText) : DEFAULT_SETTINGS.seed;
-  if (seedText !== null && seed === DEFAULT_SETTINGS.seed && seedText !== String(seed)) ignored.push(`seed=${seedText}`);
-  const settings: FrameSettings = {
-    bins: pick('bins', isText, DEFAULT_SETTINGS.bins),
-    assign: pick('assign', isText, DEFAULT_SETTINGS.assign),
-    seed,
-    grid: pick('grid', isText, DEFAULT_SETTINGS.grid),
-    rotateAt: pick('rotate-at', (v): v is 'slice' | 'occurrence' => v === 'slice' || v === 'occurrence', DEFAULT_SETTINGS.rotateAt),
+  // Each setting read by the one settings reader; a value it refuses is ignored (and listed).
+  const setting = <K extends RunSettingName>(name: K, key: string): RunSettings[K] => {
+    const value = p.get(key);
+    if (value === null) return DEFAULT_RUN_SETTINGS[name];
+    try {
+      return parseRunSettings({ [name]: value }, { naming: 'option' })[name];
+    } catch {
+      ignored.push(`${key}=${value}`);
+      return DEFAULT_RUN_SETTINGS[name];
+    }
+  };
+  const settings: RunSettings = {
+    bins: setting('bins', 'bins'),
+    assign: setting('assign', 'assign'),
+    seed: setting('seed', 'seed'),
+    grid: setting('grid', 'grid'),
+    map: DEFAULT_RUN_SETTINGS.map,
+    rotateAt: setting('rotateAt', 'rotate-at'),
     preferModel: p.get('prefer-model') === '1',
-    beyondModel: pick('beyond-model', (v): v is 'reject' | 'clamp' => v === 'reject' || v === 'clamp', DEFAULT_SETTINGS.beyondModel),
+    beyondModel: setting('beyondModel', 'beyond-model'),
   };
   const layersText = p.get('layers');
   const layerNames = layersText === null ? undefined : layersText.split(',').filter((x) => x !== '');

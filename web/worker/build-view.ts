@@ -12,7 +12,8 @@ import { reconstructFeaturesAt, type PlateFeature } from '../../src/placement';
 import type { RotationModel } from '../../src/rotation';
 import { appendGreatCircleArc, EARTH_RADIUS_KM, samePosition } from '../../src/sphere';
 import { chartScale, sliceOfAge, type TimeScale } from '../../src/time';
-import type { AnalysisView, CellEntries, CellShapes, FrameSettings, IndicatorPoints, LeverRows, PathSet, PointSet } from '../protocol';
+import type { RunSettings } from '../../src/run';
+import type { AnalysisView, CellEntries, CellShapes, IndicatorPoints, LeverRows, PathSet, PointSet } from '../protocol';
 
 /** Longest drawn step along hull and tree edges, degrees. */
 const PATH_STEP_DEG = 1;
@@ -31,7 +32,7 @@ export interface IndicatorAnalysis {
 }
 
 export interface ViewInputs {
-  readonly settings: FrameSettings;
+  readonly settings: RunSettings;
   readonly scale: TimeScale;
   readonly grid: EqualAreaGrid;
   readonly result: AnalysisResult;

@@ -1,12 +1,11 @@
 /** Reading the user's files in the worker: the occurrence table (streamed) and the optional inputs. */
 import { plateFeaturesOf, type PlateFeature } from '../../src/placement';
 import { poleTableFromRecords, type PoleTable } from '../../src/rotation';
-import {
-  TableReadError, createCsvScanner, createOccurrenceReader, detach, recordFields, type OccurrenceReadResult, type ScannedRecord,
-} from '../../src/table';
+import { readRecords } from '../../src/run';
+import { createOccurrenceReader, type OccurrenceReadResult } from '../../src/table';
 import { binsFromRecords, findChartInterval, type TimeScale } from '../../src/time';
 import type { ExtraRole, ExtraSummary, Source } from '../protocol';
-import { sha256Hex, sourceBlob, sourceName, streamText } from './stream-source';
+import { blobText, sha256Hex, sourceBlob, sourceName, streamText } from './stream-source';
 
 export interface LoadedTable {
   readonly read: OccurrenceReadResult;
@@ -37,34 +36,6 @@ export async function readOccurrenceTable(source: Source, mapping: Readonly<Reco
   }
 }
 
-/** Every record of a small table (poles, bins) as strings. */
-async function readRecords(blob: Blob): Promise<{ header: string[]; records: Array<{ line: number; fields: string[] }> }> {
-  let header: string[] | undefined;
-  const records: Array<{ line: number; fields: string[] }> = [];
-  const scanner = createCsvScanner({
-    onRecord: (r) => {
-      if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
-      if (r.count === 1 && r.raw.length === 0) return;
-      if (header === undefined) header = recordFields(r);
-      else records.push({ line: r.line, fields: recordFields(r) });
-    },
-  });
-  await streamText(blob, { push: (text) => scanner.push(text) });
-  scanner.end();
-  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
-  return { header, records };
-}
-
-/** The original text of the records on the given lines (for rejects.csv). */
-export async function rawRecords(blob: Blob, lines: ReadonlySet<number>): Promise<Map<number, string>> {
-  const found = new Map<number, string>();
-  if (lines.size === 0) return found;
-  const scanner = createCsvScanner({ onRecord: (r: ScannedRecord) => { if (lines.has(r.line)) found.set(r.line, detach(r.raw)); } });
-  await streamText(blob, { push: (text) => scanner.push(text) });
-  scanner.end();
-  return found;
-}
-
 export type ExtraInput =
   | { readonly role: 'rotation'; readonly poles: PoleTable }
   | { readonly role: 'polygons'; readonly features: readonly PlateFeature[] }
@@ -92,12 +63,12 @@ export async function readExtra(role: ExtraRole, source: Source): Promise<Loaded
 async function parseExtra(role: ExtraRole, blob: Blob, name: string): Promise<{ input: ExtraInput; description: string }> {
   switch (role) {
     case 'rotation': {
-      const { header, records } = await readRecords(blob);
+      const { header, records } = await readRecords(blobText(blob));
       const poles = poleTableFromRecords(header, records, name);
       return { input: { role, poles }, description: `${records.length} poles` };
     }
     case 'bins': {
-      const { header, records } = await readRecords(blob);
+      const { header, records } = await readRecords(blobText(blob));
       const scale = binsFromRecords(header, records, name);
       return { input: { role, scale }, description: `${scale.names.length} bins, ${scale.baseMa[0]}–${scale.topMa[scale.names.length - 1]} Ma` };
     }
@@ -114,7 +85,7 @@ async function parseExtra(role: ExtraRole, blob: Blob, name: string): Promise<{ 
     case 'indicators': {
       // Indicator tables name a kind where occurrence tables name a taxon.
       const reader = createOccurrenceReader({ mapping: { taxon: 'kind' }, resolveInterval: findChartInterval });
-      await streamText(blob, { push: (text) => reader.push(text) });
+      await blobText(blob)((text) => reader.push(text));
       const read = reader.end();
       const rejected = read.rejects.length === 0 ? '' : `, ${read.rejects.length} rejected (first: line ${read.rejects[0].line}, ${read.rejects[0].field}: ${read.rejects[0].reason})`;
       return { input: { role, read }, description: `${read.table.count} sites of ${read.table.taxon.values.length} kinds${rejected}` };

@@ -3,6 +3,7 @@
  * the command line's checks: UTF-16 and binary files refused from their first bytes, invalid
  * UTF-8 an error naming its byte offset and line, never a replacement character.
  */
+import type { TextSource } from '../../src/run';
 import { InvalidUtf8Error, LineCounter, StrictTextDecoder } from '../../src/table';
 import type { Source } from '../protocol';
 
@@ -53,6 +54,11 @@ export async function streamText(blob: Blob, callbacks: StreamCallbacks): Promis
   } finally {
     reader.releaseLock();
   }
+}
+
+/** A Blob's text as a TextSource, with streamText's checks. */
+export function blobText(blob: Blob): TextSource {
+  return (push) => streamText(blob, { push });
 }
 
 /** SHA-256 of the bytes, lower-case hex (for the session file). */

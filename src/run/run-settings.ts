@@ -1,0 +1,34 @@
+import { ROTATE_AT, type RotateAt } from '../placement';
+import { BEYOND_MODEL, type BeyondModel } from '../rotation';
+import type { AssignChoice } from './assign-choice';
+import type { BinsChoice } from './bins-choice';
+import type { GridChoice } from './grid-choice';
+
+/** Every setting that shapes a run's numbers, the same for the command line, the page and session files. */
+export interface RunSettings {
+  readonly bins: BinsChoice;
+  readonly assign: AssignChoice;
+  /** Seed of the random assignment: a whole number 0 … 2^32 − 1 (Mulberry32's state). */
+  readonly seed: number;
+  readonly grid: GridChoice;
+  /** Explicit column choices, field → column header. */
+  readonly map: Readonly<Record<string, string>>;
+  readonly rotateAt: RotateAt;
+  readonly preferModel: boolean;
+  readonly beyondModel: BeyondModel;
+}
+
+export const DEFAULT_RUN_SETTINGS: RunSettings = {
+  bins: { kind: 'chart', rank: 'stages' },
+  assign: { kind: 'midpoint' },
+  seed: 1,
+  grid: { kind: 'healpix', nside: 32 },
+  map: {},
+  rotateAt: ROTATE_AT.slice,
+  preferModel: false,
+  beyondModel: BEYOND_MODEL.reject,
+};
+
+/** The settings' names, in the order session files write them. */
+export const RUN_SETTING_NAMES = ['bins', 'assign', 'seed', 'grid', 'map', 'rotateAt', 'preferModel', 'beyondModel'] as const;
+export type RunSettingName = (typeof RUN_SETTING_NAMES)[number];

@@ -1,0 +1,76 @@
+// A run from settings to files: the session it records and the export files both front ends
+// write from it. Counts are worked by hand from the four-row table below.
+import { describe, expect, it } from 'vitest';
+import { SESSION_FORMAT, SESSION_FORMAT_VERSION } from '../../src/export/session';
+import { DEFAULT_RUN_SETTINGS, EXPORT_FILES, buildSession, exportFiles, parseRunSettings, runAnalysis, type TextSource } from '../../src/run';
+import { createOccurrenceReader } from '../../src/table';
+import { equalBins, findChartInterval } from '../../src/time';
+import { TOOL_VERSION } from '../../src/version';
+
+// Line 3 is older than the chart's oldest stage (538.8 Ma, ICS 2023/09): no slice holds it.
+// Its quoted name runs over two lines, so line 5 has a blank taxon: refused on reading. Lines 2 and 6
+// are placed from their palaeocoordinates.
+const TABLE = 'taxon,palaeo_lat,palaeo_lon,max_ma,min_ma\r\nAlpha,10,20,70,68\r\n"Beta\r\nprime",11,21,900,899\r\n,12,22,70,68\r\nGamma,-30,40,100,95\r\n';
+const text: TextSource = async (push) => push(TABLE);
+const INPUTS = { occurrences: { path: 'o.csv', sha256: 'a'.repeat(64), bytes: TABLE.length }, bins: { path: 'b.csv', sha256: 'b'.repeat(64), bytes: 9 } };
+
+function readTable() {
+  const reader = createOccurrenceReader({ resolveInterval: findChartInterval });
+  reader.push(TABLE);
+  return reader.end();
+}
+
+describe('a run', () => {
+  it('records its inputs, settings as text and what it found in the session', () => {
+    const read = readTable();
+    const settings = parseRunSettings({ grid: 'bands:10', map: ['taxon=taxon'] }, { naming: 'option' });
+    const { result } = runAnalysis(read.table, settings, {});
+    const session = buildSession(INPUTS, settings, { rowsRead: 4, accepted: 3, rejectedOnReading: 1 }, result);
+    expect(session.format).toBe(SESSION_FORMAT);
+    expect(session.formatVersion).toBe(SESSION_FORMAT_VERSION);
+    expect(session.tool).toEqual({ name: 'driftgrid', version: TOOL_VERSION });
+    expect(session.inputs).toEqual({ occurrences: INPUTS.occurrences }); // chart bins: the bins file is not an input
+    expect(session.settings).toEqual({
+      bins: 'stages', assign: 'midpoint', seed: 1, grid: 'bands:10', map: { taxon: 'taxon' }, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
+    });
+    expect(session.summary).toMatchObject({ rowsRead: 4, accepted: 3, rejectedOnReading: 1, excludedFromSlices: 1, placedFromTable: 2 });
+  });
+
+  it('records the bins table only when the run used it', () => {
+    const read = readTable();
+    const settings = { ...DEFAULT_RUN_SETTINGS, bins: { kind: 'file' } } as const;
+    const { result } = runAnalysis(read.table, settings, { bins: equalBins(50, 1000) });
+    expect(buildSession(INPUTS, settings, { rowsRead: 4, accepted: 3, rejectedOnReading: 1 }, result).inputs.bins).toEqual(INPUTS.bins);
+    expect(() => runAnalysis(read.table, settings, {})).toThrow('no bins table is loaded');
+  });
+
+  it('writes every export file, the rejects with their original text read again from the source', async () => {
+    const read = readTable();
+    const run = runAnalysis(read.table, DEFAULT_RUN_SETTINGS, {});
+    const files = await exportFiles({ run, read, inputs: INPUTS, tableText: text });
+    expect(Object.keys(files)).toEqual([...EXPORT_FILES]);
+    const rejects = String(files['rejects.csv']).split('\n');
+    expect(rejects[0]).toBe('line,field,reason,original');
+    expect(rejects[1]).toMatch(/^3,/);
+    expect(String(files['rejects.csv'])).toContain('"""Beta\r\nprime"",11,21,900,899"');
+    expect(rejects.some((line) => line.startsWith('5,taxon,'))).toBe(true);
+    const slices = String(files['slices.csv']).trim().split('\n');
+    expect(slices).toHaveLength(1 + run.scale.names.length);
+    expect(JSON.parse(String(files['session.json'])).summary.slices).toBe(run.scale.names.length);
+  });
+
+  it('writes only the files asked for, the same bytes as in the full set', async () => {
+    const read = readTable();
+    const run = runAnalysis(read.table, DEFAULT_RUN_SETTINGS, {});
+    const all = await exportFiles({ run, read, inputs: INPUTS, tableText: text });
+    let reread = 0;
+    const counted: TextSource = async (push) => {
+      reread++;
+      push(TABLE);
+    };
+    const one = await exportFiles({ run, read, inputs: INPUTS, tableText: counted }, ['cells.csv']);
+    expect(Object.keys(one)).toEqual(['cells.csv']);
+    expect(one['cells.csv']).toEqual(all['cells.csv']);
+    expect(reread).toBe(0);
+  });
+});
