@@ -3,7 +3,7 @@
  * fault, the value, and what was expected.
  */
 import type { RotationModel } from '../rotation';
-import { formatMa } from '../time/equal-bins';
+import { formatMa } from '../time';
 import { PLACEMENT_STATUS, UNPLACED_FIELDS, UNPLACED_REASONS, type UnplacedStatus } from './placement-status';
 import { ROTATE_AT, type RotateAt } from './place-occurrences';
 

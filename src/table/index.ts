@@ -23,3 +23,5 @@ export type { ResolveInterval } from './occurrence-row';
 export { createOccurrenceReader } from './occurrence-reader';
 export type { OccurrenceReader, OccurrenceReaderOptions, OccurrenceReadResult } from './occurrence-reader';
 export { oldestAge } from './oldest-age';
+export { OTHER_COLUMNS, fieldCountProblem, namedColumns } from './named-columns';
+export type { NamedColumns, OtherColumns, TableRecord } from './named-columns';

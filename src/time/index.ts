@@ -2,8 +2,8 @@ export type { AssignRule, SliceAssignment, TimeScale, UnassignedReasonCode } fro
 export { UNASSIGNED_REASONS } from './time-scale';
 export type { ChartInterval, ChartRank, ChartScaleRank } from './chart';
 export { CHART_VERSION, chartIntervals, chartScale, findChartInterval } from './chart';
-export { MAX_EQUAL_BINS, equalBins, formatMa } from './equal-bins';
-export type { BinRecord } from './user-bins';
+export { MAX_EQUAL_BINS, equalBins } from './equal-bins';
+export { formatMa } from './format-ma';
 export { BIN_COLUMNS, binsFromRecords } from './user-bins';
 export { PHANEROZOIC_BASE_MA, parseBinsOption } from './parse-bins';
 export { assignSlices, assignSlicesInto, createSliceAssignment } from './assign-slices';
@@ -11,5 +11,3 @@ export { parseAssignRule } from './parse-assign-rule';
 export type { SeededRandom } from './seeded-random';
 export { createSeededRandom, isSeed } from './seeded-random';
 export { sliceOfAge } from './slice-lookup';
-export type { TimeInputProblem } from './time-input-error';
-export { TimeInputError, describeProblem } from './time-input-error';
