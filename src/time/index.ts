@@ -1,5 +1,4 @@
-export type { AssignRule, SliceAssignment, TimeScale, UnassignedReasonCode } from './time-scale';
-export { UNASSIGNED_REASONS } from './time-scale';
+export type { AssignRule, SliceAssignment, TimeScale } from './time-scale';
 export type { ChartInterval, ChartRank, ChartScaleRank } from './chart';
 export { CHART_VERSION, chartIntervals, chartScale, findChartInterval } from './chart';
 export { MAX_EQUAL_BINS, equalBins } from './equal-bins';

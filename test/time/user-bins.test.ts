@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/problems';
+import { EXCLUSION_CODE, InputError } from '../../src/problems';
 import type { TableRecord } from '../../src/table';
 import { assignSlices, binsFromRecords } from '../../src/time';
 
@@ -40,7 +40,7 @@ describe('bins from a table', () => {
     const scale = binsFromRecords(HEADER, rows(['a', '30', '20'], ['b', '15', '5']), 'bins');
     const out = assignSlices(Float64Array.of(17), Float64Array.of(17), scale, { kind: 'midpoint' });
     expect(out.slice[0]).toBe(-1);
-    expect(out.reason[0]).toBe(1); // age outside the time scale
+    expect(out.reason[0]).toBe(EXCLUSION_CODE.ageOutside);
   });
 
   it('names line, field, value and expectation for non-numeric and negative ages', () => {
