@@ -1,7 +1,8 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
+import { InputError } from '../problems';
 import {
-  InvalidUtf8Error, LineCounter, StrictTextDecoder, TableReadError, createCsvScanner, createOccurrenceReader, detach, recordFields,
+  InvalidUtf8Error, LineCounter, StrictTextDecoder, createCsvScanner, createOccurrenceReader, detach, emptyTableError, malformedQuotingProblem, recordFields,
   type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
@@ -26,7 +27,7 @@ export interface ReadTableFileOptions extends OccurrenceReaderOptions, StreamOpt
  * Reads an occurrence table from a file: opens it read-only, streams it in chunks, refuses
  * UTF-16 and binary files from their first bytes, decodes UTF-8 strictly (an invalid byte is an
  * error naming its offset and line, never a replacement character) and feeds the reader.
- * Throws TableReadError for a file that cannot be read as a whole.
+ * Throws InputError for a file that cannot be read as a whole.
  */
 export async function readTableFile(path: string, options: ReadTableFileOptions): Promise<OccurrenceReadResult> {
   const reader = createOccurrenceReader(options);
@@ -48,7 +49,7 @@ export async function readRecordsFile(path: string, options: StreamOptions = {})
   let blankLines = 0;
   const scanner = createCsvScanner({
     onRecord: (r) => {
-      if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
+      if (r.problem !== undefined) throw new InputError([malformedQuotingProblem(r.line, detach(r.raw), r.problem)]);
       if (r.count === 1 && r.end[0] === r.start[0] && r.raw.length === 0) blankLines++;
       else if (header === undefined) header = recordFields(r);
       else records.push({ line: r.line, fields: recordFields(r) });
@@ -56,7 +57,7 @@ export async function readRecordsFile(path: string, options: StreamOptions = {})
   });
   await streamText(path, (text) => scanner.push(text), options);
   scanner.end();
-  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
+  if (header === undefined) throw emptyTableError();
   return { header, records, blankLines };
 }
 
@@ -106,14 +107,14 @@ async function streamText(path: string, push: (text: string) => void, options: S
   } catch (err) {
     stream.destroy();
     if (err instanceof InvalidUtf8Error) throw err.atLine(await lineAtByte(path, err.byte));
-    if (err instanceof TableReadError || (err instanceof Error && err.name === 'AbortError')) throw err;
+    if (err instanceof InputError || (err instanceof Error && err.name === 'AbortError')) throw err;
     throw cannotOpen(path, err);
   }
 }
 
-function cannotOpen(path: string, err: unknown): TableReadError {
+function cannotOpen(path: string, err: unknown): InputError {
   const why = err instanceof Error ? err.message : String(err);
-  return new TableReadError(`cannot read ${path}: ${why}`);
+  return new InputError([{ field: 'file', value: path, expected: `a file that can be read (${why})` }]);
 }
 
 /** Line (from 1) holding byte `byte` of the file. */

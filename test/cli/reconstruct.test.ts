@@ -258,7 +258,7 @@ describe('reconstruct inputs and options that cannot be used', () => {
     [['reconstruct', LAND, '--rotation', POLES, '--rotate-at', 'occurrence'], /--rotate-at applies to tables; assets\/demo\/land\.geojson is GeoJSON/],
     [['reconstruct', LAND, '--rotation', POLES, '--prefer-model'], /Unknown option '--prefer-model'/],
     [['reconstruct', 'assets/demo/poles.geojson', '--rotation', POLES], /assets\/demo\/poles\.geojson: cannot read it/],
-    [['reconstruct', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: the file is empty/],
+    [['reconstruct', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)/],
   ])('%j is refused with a message saying what was expected', async (args, message) => {
     const run = await runCli(...args, '--out', tempDir('reconstruct-opt'));
     expect(run.status).toBe(1);

@@ -1,8 +1,10 @@
 /** Reading the user's files in the worker: the occurrence table (streamed) and the optional inputs. */
 import { plateFeaturesOf, type PlateFeature } from '../../src/placement';
+import { InputError } from '../../src/problems';
 import { poleTableFromRecords, type PoleTable } from '../../src/rotation';
 import {
-  TableReadError, createCsvScanner, createOccurrenceReader, detach, recordFields, type OccurrenceReadResult, type ScannedRecord,
+  createCsvScanner, createOccurrenceReader, detach, emptyTableError, malformedQuotingProblem, recordFields, type OccurrenceReadResult,
+  type ScannedRecord,
 } from '../../src/table';
 import { binsFromRecords, findChartInterval, type TimeScale } from '../../src/time';
 import type { ExtraRole, ExtraSummary, Source } from '../protocol';
@@ -43,7 +45,7 @@ async function readRecords(blob: Blob): Promise<{ header: string[]; records: Arr
   const records: Array<{ line: number; fields: string[] }> = [];
   const scanner = createCsvScanner({
     onRecord: (r) => {
-      if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
+      if (r.problem !== undefined) throw new InputError([malformedQuotingProblem(r.line, detach(r.raw), r.problem)]);
       if (r.count === 1 && r.raw.length === 0) return;
       if (header === undefined) header = recordFields(r);
       else records.push({ line: r.line, fields: recordFields(r) });
@@ -51,7 +53,7 @@ async function readRecords(blob: Blob): Promise<{ header: string[]; records: Arr
   });
   await streamText(blob, { push: (text) => scanner.push(text) });
   scanner.end();
-  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
+  if (header === undefined) throw emptyTableError();
   return { header, records };
 }
 
