@@ -3,7 +3,7 @@ export type { Placement, PlacementSettings, RotateAt } from './place-occurrences
 export { PLACEMENT_STATUS, isPlaced } from './placement-status';
 export type { PlacementStatus } from './placement-status';
 export { describeExclusion } from './describe-exclusion';
-export { ADDED_PROPERTIES, PlateFeatureError, plateFeaturesOf } from './plate-features';
+export { ADDED_PROPERTIES, plateFeaturesOf } from './plate-features';
 export type { PlateFeature, PlateFeatureNote } from './plate-features';
 export { reconstructFeaturesAt } from './reconstruct-features';
 export type { ReconstructedFeature, ReconstructionNote, SliceTarget } from './reconstruct-features';

@@ -273,8 +273,8 @@ describe('reconstruct inputs and options that cannot be used', () => {
     ]);
     const run = await runCli('reconstruct', path, '--rotation', POLES, '--out', tempDir('bad-geo'));
     expect(run.status).toBe(1);
-    expect(run.stderr).toMatch(/in\.geojson: feature 1: geometry type "Point"; expected Polygon or MultiPolygon/);
-    expect(run.stderr).toMatch(/in\.geojson: feature 2: plate_id is missing; expected a property plate_id/);
+    expect(run.stderr).toMatch(/in\.geojson, feature 1 geometry type "Point": expected Polygon or MultiPolygon/);
+    expect(run.stderr).toMatch(/in\.geojson, feature 2 plate_id "": expected a property plate_id, a whole number from 0 to 2147483647 \(plate_id is missing\)/);
   });
 
   it('refuses a file that is not JSON', async () => {
