@@ -1,17 +1,14 @@
-import type { EqualAreaGrid } from './grid/equal-area-grid';
-import type { OccurrenceTable } from './table/occurrence-table';
-import type { AssignRule, TimeScale } from './time/time-scale';
-import { assignSlices } from './time/assign-slices';
-import { DistinctCounter } from './footprint/distinct-counter';
-import { groupBySlice } from './footprint/group-by-slice';
-import { slicePositions } from './footprint/slice-positions';
-import { tallyCells, type CellTallies } from './footprint/cell-tallies';
-import { gather } from './footprint/gather';
-import { measureFootprintWithShapes, type Footprint, type FootprintShapes } from './footprint/slice-footprint';
-import type { SliceLevers } from './footprint/slice-levers';
-import { DEFAULT_PLACEMENT, placeOccurrences, type Placement, type PlacementSettings } from './placement/place-occurrences';
-import { collectExclusions, type Exclusions } from './placement/exclusions';
-import type { RotationModel } from './rotation/rotation-model';
+import {
+  DistinctCounter, gather, groupBySlice, measureFootprintWithShapes, slicePositions, tallyCells,
+  type CellTallies, type Footprint, type FootprintShapes, type SliceLevers,
+} from './footprint';
+import type { EqualAreaGrid } from './grid';
+import {
+  DEFAULT_PLACEMENT, collectExclusions, placeOccurrences, type Exclusions, type Placement, type PlacementSettings,
+} from './placement';
+import type { RotationModel } from './rotation';
+import type { OccurrenceTable } from './table';
+import { assignSlices, type AssignRule, type TimeScale } from './time';
 
 export interface AnalysisSettings {
   readonly scale: TimeScale;
@@ -35,9 +32,6 @@ export interface SliceMetrics extends Footprint, SliceLevers {
   readonly taxa: number;
   readonly cells: number;
 }
-
-export { EXCLUSION_FIELDS, EXCLUSION_REASONS, exclusionStatus } from './placement/exclusions';
-export type { Exclusions } from './placement/exclusions';
 
 export interface AnalysisResult {
   readonly slices: readonly SliceMetrics[];

@@ -1,8 +1,9 @@
 import { createReadStream } from 'node:fs';
 import { stat } from 'node:fs/promises';
+import { InputError } from '../problems';
 import { readRawRecords as readRawRecordsOf, readRecords, scanRecords, type TextRecords, type TextSource } from '../run';
 import {
-  InvalidUtf8Error, LineCounter, StrictTextDecoder, TableReadError, createOccurrenceReader,
+  InvalidUtf8Error, LineCounter, StrictTextDecoder, createOccurrenceReader,
   type Delimiter, type OccurrenceReadResult, type OccurrenceReaderOptions, type ScannedRecord,
 } from '../table/index';
 import { binsFromRecords, type TimeScale } from '../time/index';
@@ -27,7 +28,7 @@ export interface ReadTableFileOptions extends OccurrenceReaderOptions, StreamOpt
  * Reads an occurrence table from a file: opens it read-only, streams it in chunks, refuses
  * UTF-16 and binary files from their first bytes, decodes UTF-8 strictly (an invalid byte is an
  * error naming its offset and line, never a replacement character) and feeds the reader.
- * Throws TableReadError for a file that cannot be read as a whole.
+ * Throws InputError for a file that cannot be read as a whole.
  */
 export async function readTableFile(path: string, options: ReadTableFileOptions): Promise<OccurrenceReadResult> {
   const reader = createOccurrenceReader(options);
@@ -79,14 +80,14 @@ async function streamText(path: string, push: (text: string) => void, options: S
   } catch (err) {
     stream.destroy();
     if (err instanceof InvalidUtf8Error) throw err.atLine(await lineAtByte(path, err.byte));
-    if (err instanceof TableReadError || (err instanceof Error && err.name === 'AbortError')) throw err;
+    if (err instanceof InputError || (err instanceof Error && err.name === 'AbortError')) throw err;
     throw cannotOpen(path, err);
   }
 }
 
-function cannotOpen(path: string, err: unknown): TableReadError {
+function cannotOpen(path: string, err: unknown): InputError {
   const why = err instanceof Error ? err.message : String(err);
-  return new TableReadError(`cannot read ${path}: ${why}`);
+  return new InputError([{ field: 'file', value: path, expected: `a file that can be read (${why})` }]);
 }
 
 /** Line (from 1) holding byte `byte` of the file. */

@@ -4,7 +4,8 @@ import { basename, extname } from 'node:path';
 import { finished } from 'node:stream/promises';
 import { PLACEMENT_COLUMNS, placementFields } from '../export/placement-fields';
 import { rejectsCsv } from '../export/rejects-csv';
-import { collectExclusions, exclusionStatus, EXCLUSION_REASONS, placeOccurrences, ROTATE_AT, type Placement } from '../placement';
+import { collectExclusions, placeOccurrences, ROTATE_AT, type Placement } from '../placement';
+import { EXCLUSIONS, EXCLUSION_STAGE, exclusionName } from '../problems';
 import { normaliseHeader, type Delimiter, type OccurrenceTable } from '../table/index';
 import { assignRuleOf, isBlankRecord } from '../run';
 import { assignSlices, findChartInterval } from '../time';
@@ -47,7 +48,10 @@ export async function reconstructTable(context: ReconstructContext): Promise<voi
   for (const [field, count] of countBy(read.rejects.map((r) => r.field))) out.push(`  rejected for ${field}: ${n(count)}`);
   const at = options.settings.rotateAt === ROTATE_AT.slice ? "each slice's mid-age" : "each row's own age";
   out.push(`reconstructed with ${model.source} at ${at}: ${n(placement.fromModel)}${placement.clamped > 0 ? ` (${n(placement.clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`);
-  for (const [reason, count] of countBy(Array.from(exclusions.reasons, (r) => `${exclusionStatus(r) === undefined ? 'not in any slice' : 'not placed'}, ${EXCLUSION_REASONS[r]}`))) {
+  for (const [reason, count] of countBy(Array.from(exclusions.reasons, (code) => {
+    const { stage, reason } = EXCLUSIONS[exclusionName(code)];
+    return `${stage === EXCLUSION_STAGE.slice ? 'not in any slice' : 'not placed'}, ${reason}`;
+  }))) {
     out.push(`  ${reason}: ${n(count)}`);
   }
   out.push(...modelNotes(model));

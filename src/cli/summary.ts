@@ -1,9 +1,10 @@
-import { EXCLUSION_REASONS, exclusionStatus, type AnalysisResult } from '../analysis';
+import type { AnalysisResult } from '../analysis';
 import { SLICE_CAUTION, sliceCautions, type SliceCaution, type SliceNumbers } from '../footprint';
+import { EXCLUSIONS, EXCLUSION_STAGE, exclusionName, type ExclusionStage } from '../problems';
 import type { RotationModel } from '../rotation';
 import type { LoneOldestRow } from '../table/lone-oldest-row';
 import type { RejectedRow } from '../table/occurrence-table';
-import { formatMa } from '../time/equal-bins';
+import { formatMa } from '../time';
 
 export interface RunSummary {
   readonly rowsRead: number;
@@ -25,8 +26,7 @@ export function printSummary(summary: RunSummary): void {
   const out: string[] = [];
   out.push(`rows read: ${n(summary.rowsRead)}; accepted: ${n(summary.accepted)}; rejected: ${n(summary.rejects.length)}`);
   for (const [field, count] of countBy(summary.rejects.map((r) => r.field))) out.push(`  rejected for ${field}: ${n(count)}`);
-  const reasons = Array.from(result.exclusions.reasons);
-  for (const [reason, count] of countBy(reasons.filter((r) => exclusionStatus(r) === undefined).map((r) => EXCLUSION_REASONS[r]))) {
+  for (const [reason, count] of countBy(exclusionReasons(result, EXCLUSION_STAGE.slice))) {
     out.push(`  not in any slice, ${reason}: ${n(count)}`);
   }
   out.push(...placementLines(result, summary.model));
@@ -45,8 +45,7 @@ function placementLines(result: AnalysisResult, model: RotationModel | undefined
   const { fromTable, fromModel, clamped } = result.placement;
   const byModel = model === undefined ? '' : `; by the rotation model ${model.source}: ${n(fromModel)}${clamped > 0 ? ` (${n(clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`;
   const lines = [`placed from the table's palaeocoordinates: ${n(fromTable)}${byModel}`];
-  const unplaced = Array.from(result.exclusions.reasons).filter((r) => exclusionStatus(r) !== undefined);
-  for (const [reason, count] of countBy(unplaced.map((r) => EXCLUSION_REASONS[r]))) lines.push(`  not placed, ${reason}: ${n(count)}`);
+  for (const [reason, count] of countBy(exclusionReasons(result, EXCLUSION_STAGE.placement))) lines.push(`  not placed, ${reason}: ${n(count)}`);
   if (model !== undefined) lines.push(...modelNotes(model));
   return lines;
 }
@@ -77,6 +76,11 @@ function cautionWording(caution: SliceCaution): string | undefined {
     case SLICE_CAUTION.noHull: return `with no convex hull, ${caution.reason} (hull_km2 left empty)`;
     case SLICE_CAUTION.wideHull: return `with a hull over ${Math.round(100 * caution.above)}% of the sphere, close to a hemisphere (a few outlying places govern its area)`;
   }
+}
+
+/** The reason of each row the analysis left out at `stage`. */
+function exclusionReasons(result: AnalysisResult, stage: ExclusionStage): string[] {
+  return Array.from(result.exclusions.reasons, (code) => EXCLUSIONS[exclusionName(code)]).flatMap((e) => (e.stage === stage ? [e.reason] : []));
 }
 
 /** What the rotation model accepted but should be told (unused columns, repeated rows). */

@@ -1,8 +1,9 @@
+import { exclusionName } from '../problems';
 import type { RotationModel } from '../rotation';
-import type { OccurrenceTable, RejectedRow } from '../table/occurrence-table';
-import { EXCLUSION_FIELDS, EXCLUSION_REASONS, exclusionStatus, type Exclusions } from './exclusions';
+import type { OccurrenceTable, RejectedRow } from '../table';
+import { describeExclusion } from './describe-exclusion';
+import type { Exclusions } from './exclusions';
 import type { Placement, RotateAt } from './place-occurrences';
-import { describePlacementProblem } from './placement-problem';
 
 /**
  * Rows the analysis could not use, as rejects with their original text (`originals`: line →
@@ -16,10 +17,7 @@ export function excludedRows(
   const { rows, reasons } = exclusions;
   return Array.from(rows, (row, k) => {
     const line = table.line[row];
-    const status = exclusionStatus(reasons[k]);
-    const { field, reason } = status === undefined
-      ? { field: EXCLUSION_FIELDS[reasons[k]], reason: EXCLUSION_REASONS[reasons[k]] }
-      : describePlacementProblem(status, table.plateId[row], placement.ageMa[row], model, rotateAt);
+    const { field, reason } = describeExclusion(exclusionName(reasons[k]), table.plateId[row], placement.ageMa[row], model, rotateAt);
     return { line, field, reason, original: originals.get(line) ?? '' };
   });
 }

@@ -9,13 +9,11 @@
  * a ring wound the other way is reversed into RFC 7946 order, and a note says so.
  */
 import type { MultiPolygon, Polygon, Position } from 'geojson';
-import { MAX_PLATE_ID, parsePlateId } from '../table/number-field';
+import { ProblemList, type InputProblem } from '../problems';
+import { MAX_PLATE_ID, parsePlateId } from '../table';
 
 /** Properties reconstruct adds to every feature it writes; an input may not have them already. */
 export const ADDED_PROPERTIES = ['slice', 'slice_name', 'reconstruction_age_ma'] as const;
-
-/** Problems listed in full; beyond this only their number. */
-const MAX_LISTED = 100;
 
 export interface PlateFeature {
   /** Position in the input, from 1. */
@@ -34,15 +32,16 @@ export interface PlateFeatureNote {
   readonly note: string;
 }
 
-/** A GeoJSON file that cannot be reconstructed: every problem found. */
-export class PlateFeatureError extends Error {
-  constructor(readonly source: string, readonly problems: readonly string[], unlisted: number) {
-    super([...problems.map((p) => `${source}: ${p}`), ...(unlisted > 0 ? [`… and ${unlisted} more problems in ${source}`] : [])].join('\n'));
-    this.name = 'PlateFeatureError';
-  }
-}
-
 const isObject = (v: unknown): v is Record<string, unknown> => typeof v === 'object' && v !== null && !Array.isArray(v);
+
+/** Characters of a JSON value shown in a problem. */
+const SHOWN_CHARS = 60;
+
+/** A JSON value as written (a string without its quotes), cut with `…` when long; empty when missing. */
+function shown(value: unknown): string {
+  const text = value === undefined ? '' : typeof value === 'string' ? value : JSON.stringify(value);
+  return text.length > SHOWN_CHARS ? `${text.slice(0, SHOWN_CHARS)}…` : text;
+}
 
 /** Twice the signed planar area of a closed lon/lat ring (shoelace formula); > 0 anticlockwise. */
 function shoelace(ring: readonly Position[]): number {
@@ -57,19 +56,18 @@ function samePoint(a: Position, b: Position): boolean {
 }
 
 class Reader {
-  readonly problems: string[] = [];
-  unlisted = 0;
+  readonly problems = new ProblemList();
   readonly notes: PlateFeatureNote[] = [];
 
-  problem(text: string): void {
-    if (this.problems.length < MAX_LISTED) this.problems.push(text);
-    else this.unlisted++;
+  /** A problem at `field` (a path such as `feature 3, ring 1`), with the value found there. */
+  problem(field: string, value: unknown, expected: string): void {
+    this.problems.add({ field, value: shown(value), expected } satisfies InputProblem);
   }
 
   /** A ring as 2-D positions in the wanted orientation, or undefined after a problem. */
   ring(value: unknown, where: string, exterior: boolean, note: (text: string) => void): Position[] | undefined {
     if (!Array.isArray(value) || value.length < 4) {
-      this.problem(`${where}: expected a closed ring of at least 4 positions`);
+      this.problem(where, value, 'a closed ring of at least 4 positions');
       return undefined;
     }
     const ring: Position[] = [];
@@ -78,7 +76,7 @@ class Reader {
       const p: unknown = value[k];
       const ok = Array.isArray(p) && p.length >= 2 && p.every((v) => typeof v === 'number' && Number.isFinite(v));
       if (!ok || Math.abs(p[0]) > 180 || Math.abs(p[1]) > 90) {
-        this.problem(`${where}, position ${k + 1} ${JSON.stringify(p)}: expected [longitude, latitude] in degrees, longitude from -180 to 180, latitude from -90 to 90`);
+        this.problem(`${where}, position ${k + 1}`, p, '[longitude, latitude] in degrees, longitude from -180 to 180, latitude from -90 to 90');
         return undefined;
       }
       extra ||= p.length > 2;
@@ -86,18 +84,21 @@ class Reader {
     }
     const first = ring[0], last = ring[ring.length - 1];
     if (first[0] !== last[0] || first[1] !== last[1]) {
-      this.problem(`${where}: the last position ${JSON.stringify(last)} differs from the first ${JSON.stringify(first)}; expected a closed ring`);
+      this.problem(`${where}, position ${ring.length}`, last, `a closed ring: the last position equal to the first, ${JSON.stringify(first)}`);
       return undefined;
     }
     const jump = ring.findIndex((p, k) => k > 0 && Math.abs(p[0] - ring[k - 1][0]) > 180 && !samePoint(p, ring[k - 1]));
     if (jump > 0) {
-      this.problem(`${where}: the edge from ${JSON.stringify(ring[jump - 1])} to ${JSON.stringify(ring[jump])} crosses the antimeridian; expected rings cut there into parts (RFC 7946 §3.1.9)`);
+      this.problem(
+        `${where}, position ${jump + 1}`, ring[jump],
+        `rings cut at the antimeridian into parts (RFC 7946 §3.1.9): the edge from ${JSON.stringify(ring[jump - 1])} to here crosses it`,
+      );
       return undefined;
     }
     if (extra) note(`${where}: positions carry a third value (altitude); it is not carried into the reconstruction`);
     const area = shoelace(ring);
     if (area === 0) {
-      this.problem(`${where}: the ring encloses no area; expected a ring around an area`);
+      this.problem(where, ring, 'a ring around an area (this ring encloses no area)');
       return undefined;
     }
     if (area > 0 !== exterior) {
@@ -109,7 +110,7 @@ class Reader {
 
   polygon(value: unknown, where: string, note: (text: string) => void): Position[][] | undefined {
     if (!Array.isArray(value) || value.length === 0) {
-      this.problem(`${where}: expected an array of rings (the exterior, then any holes)`);
+      this.problem(where, value, 'an array of rings (the exterior, then any holes)');
       return undefined;
     }
     const rings = value.map((r, k) => this.ring(r, `${where}, ring ${k + 1}`, k === 0, note));
@@ -118,7 +119,7 @@ class Reader {
 
   geometry(value: unknown, where: string, note: (text: string) => void): Polygon | MultiPolygon | undefined {
     if (!isObject(value)) {
-      this.problem(`${where}: no geometry; expected a Polygon or MultiPolygon`);
+      this.problem(`${where} geometry`, value, 'a Polygon or MultiPolygon geometry (there is none)');
       return undefined;
     }
     if (value.type === 'Polygon') {
@@ -127,20 +128,20 @@ class Reader {
     }
     if (value.type === 'MultiPolygon') {
       if (!Array.isArray(value.coordinates) || value.coordinates.length === 0) {
-        this.problem(`${where}: expected an array of polygons`);
+        this.problem(where, value.coordinates, 'an array of polygons');
         return undefined;
       }
       const parts = value.coordinates.map((p: unknown, k: number) => this.polygon(p, `${where}, polygon ${k + 1}`, note));
       return parts.every((p) => p !== undefined) ? { type: 'MultiPolygon', coordinates: parts as Position[][][] } : undefined;
     }
-    this.problem(`${where}: geometry type ${JSON.stringify(value.type)}; expected Polygon or MultiPolygon (points belong in a table)`);
+    this.problem(`${where} geometry type`, value.type, 'Polygon or MultiPolygon (points belong in a table)');
     return undefined;
   }
 
   feature(value: unknown, index: number): PlateFeature | undefined {
     const where = `feature ${index}`;
     if (!isObject(value) || value.type !== 'Feature') {
-      this.problem(`${where}: expected an object with "type": "Feature"`);
+      this.problem(where, value, 'an object with "type": "Feature"');
       return undefined;
     }
     const properties = isObject(value.properties) ? value.properties : {};
@@ -148,10 +149,10 @@ class Reader {
     const plateId = typeof raw === 'number' ? (Number.isInteger(raw) && raw >= 0 && raw <= MAX_PLATE_ID ? raw : -1)
       : typeof raw === 'string' ? parsePlateId(raw) : -1;
     if (plateId < 0) {
-      this.problem(`${where}: plate_id ${raw === undefined ? 'is missing' : JSON.stringify(raw)}; expected a property plate_id, a whole number from 0 to ${MAX_PLATE_ID}`);
+      this.problem(`${where} plate_id`, raw, `a property plate_id, a whole number from 0 to ${MAX_PLATE_ID}${raw === undefined ? ' (plate_id is missing)' : ''}`);
     }
     for (const name of ADDED_PROPERTIES) {
-      if (name in properties) this.problem(`${where}: already has a property "${name}"; reconstruct adds it to every feature it writes, so rename it`);
+      if (name in properties) this.problem(`${where} property ${name}`, properties[name], `no property "${name}": reconstruct adds it to every feature it writes, so rename it`);
     }
     const notes: string[] = [];
     const geometry = this.geometry(value.geometry, where, (text) => notes.push(text));
@@ -164,7 +165,7 @@ class Reader {
 
 /**
  * The features of a parsed GeoJSON object, validated and in RFC 7946 ring order, with notes on
- * what was accepted but changed. Throws PlateFeatureError listing every problem.
+ * what was accepted but changed. Throws InputError naming `source` and listing every problem.
  */
 export function plateFeaturesOf(root: unknown, source: string): { features: PlateFeature[]; notes: PlateFeatureNote[] } {
   const reader = new Reader();
@@ -172,11 +173,10 @@ export function plateFeaturesOf(root: unknown, source: string): { features: Plat
   if (isObject(root) && root.type === 'FeatureCollection' && Array.isArray(root.features)) list = root.features;
   else if (isObject(root) && root.type === 'Feature') list = [root];
   else {
-    const type = isObject(root) ? JSON.stringify(root.type) : 'none';
-    reader.problem(`type ${type}; expected a FeatureCollection of Polygon or MultiPolygon features with a plate_id property`);
+    reader.problem('type', isObject(root) ? root.type : root, 'a FeatureCollection of Polygon or MultiPolygon features with a plate_id property');
   }
-  if (list.length === 0 && reader.problems.length === 0) reader.problem('the FeatureCollection has no features; expected at least one');
+  if (list.length === 0 && reader.problems.count === 0) reader.problem('features', list, 'at least one feature (the FeatureCollection has none)');
   const features = list.map((f, k) => reader.feature(f, k + 1));
-  if (reader.problems.length > 0) throw new PlateFeatureError(source, reader.problems, reader.unlisted);
+  reader.problems.throwIfAny(source);
   return { features: features as PlateFeature[], notes: reader.notes };
 }

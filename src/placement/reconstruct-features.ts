@@ -7,7 +7,7 @@ import type { MultiPolygon, Polygon } from 'geojson';
 import {
   createQuaternion, reconstructGeometry, ROTATION_STATUS, type GeometryReconstructionOptions, type RotationModel,
 } from '../rotation';
-import { formatMa } from '../time/equal-bins';
+import { formatMa } from '../time';
 import type { PlateFeature } from './plate-features';
 
 export interface ReconstructedFeature {

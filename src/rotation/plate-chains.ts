@@ -9,7 +9,7 @@
  */
 import { intervalAt, type PlateIntervals } from './plate-intervals';
 import type { PoleTable } from './pole-table';
-import { ProblemList } from './pole-table-error';
+import { ProblemList } from '../problems';
 
 /** How far back a plate can be reconstructed. */
 export interface PlateReach {
@@ -58,7 +58,7 @@ function eventAges(plates: ReadonlyMap<number, PlateIntervals>): number[] {
 }
 
 /**
- * Fixed plate, cycles and reach of every plate. Throws PoleTableError when there is not exactly
+ * Fixed plate, cycles and reach of every plate. Throws InputError when there is not exactly
  * one fixed plate or when plates form a cycle at some age (naming the plates and the ages).
  */
 export function plateChainsOf(table: PoleTable, plates: ReadonlyMap<number, PlateIntervals>): PlateChains {

@@ -11,7 +11,7 @@
  *   Between two ages whose rows name different parents nothing can be interpolated: an error.
  */
 import type { PoleTable } from './pole-table';
-import { ProblemList } from './pole-table-error';
+import { ProblemList } from '../problems';
 import { createQuaternion, quaternionFromPole, type Quaternion } from './quaternion';
 import { SLERP_ARC_SIZE, slerpArcInto } from './slerp';
 
@@ -118,7 +118,7 @@ function intervalsOf(table: PoleTable, plate: number, rows: readonly number[], p
   return { plateId: plate, ages: Float64Array.from(knots, (k) => k.ageMa), parents, young, old, arcs };
 }
 
-/** The intervals of every plate in the table, by plate id; throws PoleTableError on the
+/** The intervals of every plate in the table, by plate id; throws InputError on the
  * problems described above. Adds notes about unused rows and non-identity 0 Ma rows. */
 export function plateIntervalsOf(table: PoleTable, notes: string[]): Map<number, PlateIntervals> {
   const rowsByPlate = new Map<number, number[]>();

@@ -4,8 +4,10 @@
  * present-day positions to where they were at `age_ma`, in the frame of the plate `relative_to`;
  * positive angles turn anticlockwise seen from above the pole (right-hand rule).
  */
-import { MAX_PLATE_ID, isBlank, parseDecimal, parsePlateId } from '../table/number-field';
-import { ProblemList } from './pole-table-error';
+import { ProblemList } from '../problems';
+import {
+  MAX_PLATE_ID, OTHER_COLUMNS, fieldCountProblem, isBlank, namedColumns, parseDecimal, parsePlateId, type TableRecord,
+} from '../table';
 import { quaternionFromPole } from './quaternion';
 
 /** The columns of a pole table, in any order; others are allowed and not used. */
@@ -15,12 +17,6 @@ type PoleColumn = (typeof POLE_TABLE_COLUMNS)[number];
 /** Two rows for the same plate, age and parent agree when their unit quaternions differ by
  * less than this in every component (up to sign): only rounding apart, about 1e-10°. */
 const SAME_ROTATION_TOLERANCE = 1e-12;
-
-/** One scanned record of a pole table; the header is line 1. */
-export interface PoleRecord {
-  readonly line: number;
-  readonly fields: readonly string[];
-}
 
 /** A validated pole table, columnar, in file order, each (plate, age, relative_to) once. */
 export interface PoleTable {
@@ -53,20 +49,6 @@ interface PoleRow {
 
 const PLATE_ID_EXPECTED = `a plate id: a whole number from 0 to ${MAX_PLATE_ID}`;
 
-function columnIndex(header: readonly string[], problems: ProblemList, notes: string[]): Record<PoleColumn, number> {
-  const index: Record<PoleColumn, number> = { plate_id: -1, age_ma: -1, pole_lat: -1, pole_lon: -1, angle_deg: -1, relative_to: -1 };
-  header.forEach((cell, i) => {
-    const key = cell.trim().toLowerCase();
-    if (!(POLE_TABLE_COLUMNS as readonly string[]).includes(key)) notes.push(`column "${cell}" is not used`);
-    else if (index[key as PoleColumn] >= 0) problems.add({ line: 1, field: 'header', value: cell, expected: `the column ${key} only once` });
-    else index[key as PoleColumn] = i;
-  });
-  for (const column of POLE_TABLE_COLUMNS) {
-    if (index[column] < 0) problems.add({ line: 1, field: column, value: '', expected: `a column named ${column} in the header` });
-  }
-  return index;
-}
-
 /** Reads one field as a number in [min, max], or NaN after adding a problem. */
 function numberField(
   line: number, field: PoleColumn, raw: string, what: string, min: number, max: number, range: string, problems: ProblemList,
@@ -84,10 +66,11 @@ function plateField(line: number, field: PoleColumn, raw: string, problems: Prob
   return id;
 }
 
-function parseRow(record: PoleRecord, width: number, c: Record<PoleColumn, number>, problems: ProblemList): PoleRow | undefined {
+function parseRow(record: TableRecord, width: number, c: Readonly<Record<PoleColumn, number>>, problems: ProblemList): PoleRow | undefined {
   const { line, fields } = record;
-  if (fields.length !== width) {
-    problems.add({ line, field: 'row', value: fields.join(','), expected: `${width} fields, as in the header` });
+  const miscount = fieldCountProblem(record, width);
+  if (miscount !== undefined) {
+    problems.add(miscount);
     return undefined;
   }
   const before = problems.count;
@@ -152,19 +135,21 @@ function distinctRows(rows: readonly PoleRow[], problems: ProblemList, notes: st
 
 /**
  * Validates the records of a pole table (as scanned by `createCsvScanner`; the header is line
- * 1) and returns it columnar. Columns are matched by name in any order and case; others are
- * noted and not used. Blank lines are noted and skipped. Throws PoleTableError listing every
+ * 1) and returns it columnar. Columns are matched by name as namedColumns does; others are
+ * noted and not used. Blank lines are noted and skipped. Throws InputError listing every
  * problem: missing or repeated columns, wrong field counts, plate ids that are not whole
  * numbers, non-numeric values, negative ages, pole latitudes outside [−90, 90] or longitudes
  * outside [−180, 180] (not normalised), a plate relative to itself, two different rotations
  * for one plate, age and relative_to (an identical repeat is noted and kept once), more than
  * two parents for one plate and age, and an empty table.
  */
-export function poleTableFromRecords(header: readonly string[], records: readonly PoleRecord[], source: string): PoleTable {
+export function poleTableFromRecords(header: readonly string[], records: readonly TableRecord[], source: string): PoleTable {
   const problems = new ProblemList();
-  const notes: string[] = [];
-  const c = columnIndex(header, problems, notes);
+  const columns = namedColumns(header, POLE_TABLE_COLUMNS, OTHER_COLUMNS.ignore);
+  for (const problem of columns.problems) problems.add(problem);
   problems.throwIfAny(source);
+  const c = columns.index;
+  const notes = columns.unused.map((cell) => `column "${cell}" is not used`);
   const parsed: PoleRow[] = [];
   for (const record of records) {
     if (record.fields.every(isBlank)) {

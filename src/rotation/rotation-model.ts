@@ -178,7 +178,7 @@ function listed(ids: readonly number[]): string {
 }
 
 /**
- * The rotation model of a validated pole table. Throws PoleTableError when the table cannot
+ * The rotation model of a validated pole table. Throws InputError when the table cannot
  * be one: rows that cannot be interpolated across a change of parent, not exactly one fixed
  * plate, or plates that form a cycle at some age.
  */

@@ -1,4 +1,5 @@
-import { TimeInputError, parseAssignRule, type AssignRule } from '../time';
+import { InputError } from '../problems';
+import { parseAssignRule, type AssignRule } from '../time';
 
 /** How an age range goes to a slice; a random choice draws with the run's seed. */
 export type AssignChoice =
@@ -26,7 +27,7 @@ export function assignChoiceOf(text: string): AssignChoice | { readonly expected
     // The seed is a setting of its own, checked on its own: any valid seed will do here.
     rule = parseAssignRule(text, 0);
   } catch (error) {
-    if (error instanceof TimeInputError) return { expected: error.problems[0].field === 'overlap' ? error.problems[0].expected : ASSIGN_EXPECTED };
+    if (error instanceof InputError) return { expected: error.problems[0].field === 'overlap' ? error.problems[0].expected : ASSIGN_EXPECTED };
     throw error;
   }
   return rule.kind === 'random' ? { kind: 'random' } : rule;

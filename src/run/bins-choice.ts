@@ -1,4 +1,5 @@
-import { TimeInputError, parseBinsOption, type ChartScaleRank } from '../time';
+import { InputError } from '../problems';
+import { parseBinsOption, type ChartScaleRank } from '../time';
 
 /** The time bins of a run: a rank of the built-in chart, equal bins of a width, or the user's own bins table. */
 export type BinsChoice =
@@ -38,7 +39,7 @@ export function binsChoiceOf(text: string): BinsChoice | { readonly expected: st
   try {
     parseBinsOption(option);
   } catch (error) {
-    if (error instanceof TimeInputError) return { expected: option.startsWith('equal:') ? error.problems[0].expected : BINS_EXPECTED };
+    if (error instanceof InputError) return { expected: option.startsWith('equal:') ? error.problems[0].expected : BINS_EXPECTED };
     throw error;
   }
   if (option.startsWith('equal:')) return { kind: 'equal', widthMyr: Number(option.slice('equal:'.length).trim()) };

@@ -1,4 +1,5 @@
-import { TableReadError, createCsvScanner, detach, recordFields, type Delimiter, type ScannedRecord } from '../table';
+import { InputError } from '../problems';
+import { createCsvScanner, detach, emptyTableError, malformedQuotingProblem, recordFields, type Delimiter, type ScannedRecord } from '../table';
 import type { TextSource } from './text-source';
 
 /** The records of a small CSV/TSV table (bins, poles) as strings, with their lines. */
@@ -27,14 +28,14 @@ export async function readRecords(source: TextSource): Promise<TextRecords> {
   const records: Array<{ line: number; fields: string[] }> = [];
   let blankLines = 0;
   await scanRecords(source, (r) => {
-    if (r.problem !== undefined) throw new TableReadError(`line ${r.line}: malformed quoting: ${r.problem}`, r.line);
+    if (r.problem !== undefined) throw new InputError([malformedQuotingProblem(r.line, detach(r.raw), r.problem)]);
     if (isBlankRecord(r)) {
-      if (header === undefined) throw new TableReadError('line 1 is blank; the first line must be the header naming the columns', 1);
+      if (header === undefined) throw new InputError([{ line: 1, field: 'header', value: '', expected: 'the header naming the columns on the first line (line 1 is blank)' }]);
       blankLines++;
     } else if (header === undefined) header = recordFields(r);
     else records.push({ line: r.line, fields: recordFields(r) });
   });
-  if (header === undefined) throw new TableReadError('the file is empty; expected a header line');
+  if (header === undefined) throw emptyTableError();
   return { header, records, blankLines };
 }
 

@@ -1,7 +1,8 @@
 import { detectDelimiter, type Delimiter } from './delimiter-detection';
 import { scanQuotedRecord, scanQuotedSpans, type QuotedRecordState } from './quoted-record';
 import { RecordView, type ScannedRecord } from './scanned-record';
-import { TableReadError } from './table-read-error';
+import { InputError } from '../problems';
+import { excerpt } from './table-problems';
 
 /** Longest record accepted, in characters (1 MiB); a longer one means the input is not a table. */
 export const MAX_RECORD_CHARS = 1 << 20;
@@ -16,7 +17,7 @@ export interface CsvScannerOptions {
 export interface CsvScanner {
   /** Scans a piece of text; records are emitted as soon as they are complete. */
   push(chunk: string): void;
-  /** Scans what is left; throws TableReadError on a quote that is never closed. */
+  /** Scans what is left; throws InputError on a quote that is never closed. */
   end(): void;
   /** The delimiter in use, once known. */
   readonly delimiter: Delimiter | undefined;
@@ -173,7 +174,7 @@ class Scanner implements CsvScanner {
   }
 
   private emit(start: number, end: number, line: number, problem: string | undefined): void {
-    if (end - start > this.max) throw this.tooLong(line);
+    if (end - start > this.max) throw this.tooLong(line, start);
     this.recStart = start;
     this.recEnd = end;
     this.view.line = line;
@@ -181,17 +182,18 @@ class Scanner implements CsvScanner {
     this.onRecord(this.view);
   }
 
-  private tooLong(line = this.line): TableReadError {
+  private tooLong(line = this.line, start = this.pos): InputError {
+    const value = excerpt(this.buf, start);
     if (this.openQuoteLine > 0) {
-      return new TableReadError(
-        `line ${this.openQuoteLine}: a quoted field starts here and is still open after ${this.max} characters; check for an unbalanced quote (")`,
-        this.openQuoteLine,
-      );
+      return new InputError([{
+        line: this.openQuoteLine, field: 'row', value,
+        expected: `a closing quote (") within ${this.max} characters: a quoted field starts on this line and is still open; check for an unbalanced quote`,
+      }]);
     }
-    return new TableReadError(
-      `line ${line}: a record longer than ${this.max} characters; this does not look like a table with one record per line`,
-      line,
-    );
+    return new InputError([{
+      line, field: 'row', value,
+      expected: `a record of at most ${this.max} characters; this does not look like a table with one record per line`,
+    }]);
   }
 }
 

@@ -1,6 +1,5 @@
 export { ABSENT_CODE, NO_PLATE } from './occurrence-table';
 export type { CodedColumn, OccurrenceTable, RejectedRow } from './occurrence-table';
-export { TableReadError } from './table-read-error';
 export { DELIMITERS, detectDelimiter } from './delimiter-detection';
 export type { Delimiter } from './delimiter-detection';
 export { MAX_RECORD_CHARS, createCsvScanner } from './csv-scanner';
@@ -25,3 +24,6 @@ export type { OccurrenceReader, OccurrenceReaderOptions, OccurrenceReadResult } 
 export { oldestAge } from './oldest-age';
 export { LONE_STRETCH_SHARE, loneOldestRow } from './lone-oldest-row';
 export type { LoneOldestRow } from './lone-oldest-row';
+export { OTHER_COLUMNS, fieldCountProblem, namedColumns } from './named-columns';
+export type { NamedColumns, OtherColumns, TableRecord } from './named-columns';
+export { emptyTableError, excerpt, malformedQuotingProblem } from './table-problems';

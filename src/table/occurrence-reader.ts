@@ -6,7 +6,8 @@ import type { OccurrenceTable, RejectedRow } from './occurrence-table';
 import { recordFields, type ScannedRecord } from './scanned-record';
 import { detach } from './string-dictionary';
 import { OccurrenceTableBuilder } from './table-builder';
-import { TableReadError } from './table-read-error';
+import { InputError } from '../problems';
+import { emptyTableError, malformedQuotingProblem } from './table-problems';
 
 export interface OccurrenceReaderOptions {
   /** Explicit `field: column name` pairs; they win over synonyms. */
@@ -34,7 +35,7 @@ export interface OccurrenceReadResult {
 
 export interface OccurrenceReader {
   push(chunk: string): void;
-  /** Finishes reading; throws TableReadError when the table as a whole cannot be read. */
+  /** Finishes reading; throws InputError when the table as a whole cannot be read. */
   end(): OccurrenceReadResult;
 }
 
@@ -59,12 +60,14 @@ export function createOccurrenceReader(options: OccurrenceReaderOptions): Occurr
 
   const onRecord = (record: ScannedRecord): void => {
     if (record.count === 1 && record.end[0] === record.start[0] && record.raw.length === 0) {
-      if (columns === undefined) throw new TableReadError('line 1 is blank; the first line must be the header naming the columns', 1);
+      if (columns === undefined) {
+        throw new InputError([{ line: 1, field: 'header', value: '', expected: 'the header naming the columns on the first line (line 1 is blank)' }]);
+      }
       blankLines++;
       return;
     }
     if (columns === undefined || builder === undefined) {
-      if (record.problem !== undefined) throw new TableReadError(`header (line 1): ${record.problem}`, 1);
+      if (record.problem !== undefined) throw new InputError([malformedQuotingProblem(record.line, detach(record.raw), record.problem)]);
       columns = mapColumns(recordFields(record), options.mapping);
       builder = new OccurrenceTableBuilder(columns.index);
       return;
@@ -91,8 +94,8 @@ export function createOccurrenceReader(options: OccurrenceReaderOptions): Occurr
     },
     end(): OccurrenceReadResult {
       scanner.end();
-      if (columns === undefined || builder === undefined) throw new TableReadError('the file is empty; expected a header line and data rows');
-      if (rowsRead === 0) throw new TableReadError('the file has a header but no data rows', 1);
+      if (columns === undefined || builder === undefined) throw emptyTableError('a header line naming the columns, then data rows');
+      if (rowsRead === 0) throw new InputError([{ line: 2, field: 'row', value: '', expected: 'data rows after the header (the file has a header but no data rows)' }]);
       onProgress?.(rowsRead);
       return { table: builder.finish(), rejects, rowsRead, blankLines, columns, delimiter: scanner.delimiter ?? ',' };
     },

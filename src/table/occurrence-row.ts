@@ -1,3 +1,4 @@
+import type { RowProblem } from '../problems';
 import type { ColumnIndex } from './column-synonyms';
 import { MAX_PLATE_ID, describeBadNumber, isBlank, parseDecimalSpan, parsePlateIdSpan } from './number-field';
 import { EARTH_AGE_MA, WITHIN_EARTH_AGE } from '../time/earth-age';
@@ -20,12 +21,6 @@ export interface RowValues {
   lat: number;
   lon: number;
   plateId: number;
-}
-
-/** Why a row was not accepted: our field name and a reason naming the value and what was expected. */
-export interface RowProblem {
-  readonly field: string;
-  readonly reason: string;
 }
 
 export function createRowValues(): RowValues {

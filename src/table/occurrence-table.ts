@@ -1,3 +1,5 @@
+import type { RowProblem } from '../problems';
+
 /** Code stored where a row has no value for an optional dictionary column (collection…). */
 export const ABSENT_CODE = 0xffffffff;
 
@@ -39,13 +41,10 @@ export interface OccurrenceTable {
   readonly group?: CodedColumn;
 }
 
-/** A row that was not accepted, with the reason a person can act on. */
-export interface RejectedRow {
+/** A row that was not accepted or was left out, with the reason a person can act on. */
+export interface RejectedRow extends RowProblem {
   /** Line on which the record starts (header is line 1). */
   readonly line: number;
-  /** Our field name (`taxon`, `max_ma`, `palaeo_lat`…) or `row` for the whole record. */
-  readonly field: string;
-  readonly reason: string;
   /** The record as it stood in the file, without its line ending. */
   readonly original: string;
 }

@@ -1,5 +1,6 @@
 import type { RecordView } from './scanned-record';
-import { TableReadError } from './table-read-error';
+import { InputError } from '../problems';
+import { excerpt } from './table-problems';
 
 const LF = 10;
 const CR = 13;
@@ -41,7 +42,7 @@ export function scanQuotedRecord(
       for (;;) {
         const q = text.indexOf('"', j);
         if (q < 0 || (q + 1 === n && !final)) {
-          if (q < 0 && final) throw unbalancedQuote(quoteLine);
+          if (q < 0 && final) throw unbalancedQuote(quoteLine, text, i);
           out.openQuoteLine = quoteLine;
           return false;
         }
@@ -134,11 +135,11 @@ export function scanQuotedSpans(
   }
 }
 
-function unbalancedQuote(line: number): TableReadError {
-  return new TableReadError(
-    `unbalanced quote: the quoted field that starts on line ${line} is never closed (a quote inside a quoted value is written as "")`,
-    line,
-  );
+function unbalancedQuote(line: number, text: string, fieldStart: number): InputError {
+  return new InputError([{
+    line, field: 'row', value: excerpt(text, fieldStart),
+    expected: 'a closing quote for the quoted field that starts on this line, which is never closed (unbalanced quote; a quote inside a quoted value is written as "")',
+  }]);
 }
 
 /** Position of the next delimiter or line end at or after i (text.length when none). */

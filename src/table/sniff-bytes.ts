@@ -1,3 +1,5 @@
+import type { InputProblem } from '../problems';
+
 /** How many leading bytes sniffBytes looks at. */
 export const SNIFF_BYTES = 64 * 1024;
 
@@ -6,7 +8,7 @@ export const SNIFF_BYTES = 64 * 1024;
  * Catches UTF-16/UTF-32 (with or without a byte-order mark), ZIP archives (a spreadsheet
  * workbook is one), gzip and other binary data (NUL bytes), before any decoding is tried.
  */
-export function sniffBytes(bytes: Uint8Array): string | undefined {
+export function sniffBytes(bytes: Uint8Array): InputProblem | undefined {
   const n = Math.min(bytes.length, SNIFF_BYTES);
   const b0 = bytes[0];
   const b1 = bytes[1];
@@ -14,9 +16,9 @@ export function sniffBytes(bytes: Uint8Array): string | undefined {
   if (n >= 4 && b0 === 0 && b1 === 0 && bytes[2] === 0xfe && bytes[3] === 0xff) return utf('UTF-32');
   if (n >= 2 && ((b0 === 0xff && b1 === 0xfe) || (b0 === 0xfe && b1 === 0xff))) return utf('UTF-16');
   if (n >= 4 && b0 === 0x50 && b1 === 0x4b && bytes[2] === 3 && bytes[3] === 4) {
-    return 'file looks like a ZIP archive (a spreadsheet workbook is one); save the sheet as CSV or TSV';
+    return { field: 'file', value: 'a ZIP archive (a spreadsheet workbook is one)', expected: 'a CSV or TSV text file; save the sheet as CSV or TSV' };
   }
-  if (n >= 2 && b0 === 0x1f && b1 === 0x8b) return 'file is gzip-compressed; decompress it first';
+  if (n >= 2 && b0 === 0x1f && b1 === 0x8b) return { field: 'file', value: 'gzip-compressed data', expected: 'a CSV or TSV text file; decompress it first' };
   let evenNul = 0;
   let oddNul = 0;
   let firstNul = -1;
@@ -30,9 +32,9 @@ export function sniffBytes(bytes: Uint8Array): string | undefined {
   // ASCII text in UTF-16 has a NUL in every other byte, on one side only (common practice).
   const half = n / 2;
   if (Math.max(evenNul, oddNul) > 0.4 * half && Math.min(evenNul, oddNul) < 0.05 * half) return utf('UTF-16');
-  return `file looks binary (a NUL byte at offset ${firstNul}); a CSV or TSV text file was expected`;
+  return { field: 'file', value: `binary data (a NUL byte at offset ${firstNul})`, expected: 'a CSV or TSV text file' };
 }
 
-function utf(kind: string): string {
-  return `file looks like ${kind} text; save it as UTF-8`;
+function utf(kind: string): InputProblem {
+  return { field: 'encoding', value: `${kind} text`, expected: 'UTF-8 text; save the file as UTF-8' };
 }

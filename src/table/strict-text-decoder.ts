@@ -4,8 +4,8 @@
  * byte is an error, never a replacement character). Where the bytes come from is the caller's
  * business: a file in Node, a Blob in the browser.
  */
+import { InputError } from '../problems';
 import { sniffBytes } from './sniff-bytes';
-import { TableReadError } from './table-read-error';
 import { invalidUtf8Offset } from './utf8-check';
 
 /** Invalid UTF-8 at `byte` (counting from 0); the caller finds the line (see LineCounter) and reports it. */
@@ -16,8 +16,10 @@ export class InvalidUtf8Error extends Error {
   }
 
   /** The message for the user, once the line is known. */
-  atLine(line: number): TableReadError {
-    return new TableReadError(`line ${line}: invalid UTF-8 at byte ${this.byte} (counting from 0); save the file as UTF-8`, line);
+  atLine(line: number): InputError {
+    return new InputError([{
+      line, field: 'encoding', value: `invalid UTF-8 at byte ${this.byte} (counting from 0)`, expected: 'UTF-8 text; save the file as UTF-8',
+    }]);
   }
 }
 
@@ -27,11 +29,11 @@ export class StrictTextDecoder {
   /** Bytes decoded so far. */
   bytesRead = 0;
 
-  /** Text of the next chunk; throws TableReadError for a refused file, InvalidUtf8Error for a bad byte. */
+  /** Text of the next chunk; throws InputError for a refused file, InvalidUtf8Error for a bad byte. */
   decode(chunk: Uint8Array): string {
     if (this.bytesRead === 0) {
       const problem = sniffBytes(chunk);
-      if (problem !== undefined) throw new TableReadError(problem);
+      if (problem !== undefined) throw new InputError([problem]);
     }
     let text: string;
     try {

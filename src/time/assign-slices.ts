@@ -1,12 +1,7 @@
+import { EXCLUSION_CODE, NOT_EXCLUDED } from '../problems';
 import { createSeededRandom } from './seeded-random';
 import { firstSliceEndingBelow, lastSliceStartingAbove, sliceOfAge } from './slice-lookup';
 import type { AssignRule, SliceAssignment, TimeScale } from './time-scale';
-
-// Indices into UNASSIGNED_REASONS.
-const ASSIGNED = 0;
-const OUTSIDE = 1;
-const SPANS = 2;
-const SHARE_TOO_SMALL = 3;
 
 /** Empty output columns for `count` rows, for assignSlicesInto. */
 export function createSliceAssignment(count: number): SliceAssignment {
@@ -15,7 +10,7 @@ export function createSliceAssignment(count: number): SliceAssignment {
 
 function assign(out: SliceAssignment, row: number, slice: number, ageMa: number): void {
   out.slice[row] = slice;
-  out.reason[row] = ASSIGNED;
+  out.reason[row] = NOT_EXCLUDED;
   out.age[row] = ageMa;
 }
 
@@ -27,7 +22,7 @@ function reject(out: SliceAssignment, row: number, reason: number): void {
 
 function assignPoint(out: SliceAssignment, row: number, scale: TimeScale, ageMa: number): void {
   const s = sliceOfAge(scale.baseMa, scale.topMa, ageMa);
-  if (s < 0) reject(out, row, OUTSIDE);
+  if (s < 0) reject(out, row, EXCLUSION_CODE.ageOutside);
   else assign(out, row, s, ageMa);
 }
 
@@ -61,10 +56,10 @@ function withinRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, 
     }
     const a = firstSliceEndingBelow(topMa, hi);
     const b = lastSliceStartingAbove(baseMa, lo);
-    if (a > b) reject(out, r, OUTSIDE);
+    if (a > b) reject(out, r, EXCLUSION_CODE.ageOutside);
     else if (a === b && topMa[a] <= lo && hi <= baseMa[a]) assign(out, r, a, 0.5 * (hi + lo));
-    else if (hi > baseMa[a] || lo < topMa[b] || hasGap(scale, a, b)) reject(out, r, OUTSIDE);
-    else reject(out, r, SPANS);
+    else if (hi > baseMa[a] || lo < topMa[b] || hasGap(scale, a, b)) reject(out, r, EXCLUSION_CODE.ageOutside);
+    else reject(out, r, EXCLUSION_CODE.spansSlices);
   }
 }
 
@@ -80,7 +75,7 @@ function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale,
     const a = firstSliceEndingBelow(topMa, hi);
     const b = lastSliceStartingAbove(baseMa, lo);
     if (a > b) {
-      reject(out, r, OUTSIDE);
+      reject(out, r, EXCLUSION_CODE.ageOutside);
       continue;
     }
     let best = -1;
@@ -94,7 +89,7 @@ function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale,
       }
     }
     if (bestLength / (hi - lo) >= fraction) assign(out, r, best, 0.5 * (hi + lo));
-    else reject(out, r, SHARE_TOO_SMALL);
+    else reject(out, r, EXCLUSION_CODE.shareTooSmall);
   }
 }
 
@@ -106,12 +101,12 @@ function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale,
  * - `midpoint`: the slice holding (max + min) / 2.
  * - `within`: the slice that holds the whole range. Containment is closed at both ends for a range
  *   of positive length (top <= min and max <= base): its end points carry no weight, so a range
- *   that is exactly a stage lies in that stage. Otherwise reason 1 if part of the range lies
- *   outside every slice (beyond the scale or in a gap), else reason 2.
+ *   that is exactly a stage lies in that stage. Otherwise ageOutside if part of the range lies
+ *   outside every slice (beyond the scale or in a gap), else spansSlices.
  * - `overlap:F`: the slice holding the largest share of the range's length, if that share is at
  *   least F; ties go to the younger slice (agreeing with the midpoint rule, since a range split
  *   evenly across a boundary has its midpoint on that boundary). The share counts the whole range,
- *   parts outside the scale included. Reason 1 if no slice overlaps, else 3.
+ *   parts outside the scale included. ageOutside if no slice overlaps, else shareTooSmall.
  * - `random`: one seeded uniform draw in [min, max] per row, in row order (Mulberry32).
  *
  * `out.age` is the midpoint for midpoint, within and overlap, the draw for random; NaN when

@@ -1,24 +1,12 @@
-import { TimeInputError, type TimeInputProblem } from './time-input-error';
+import { InputError, type InputProblem } from '../problems';
+import { decimalMa, formatMa } from './format-ma';
 import type { TimeScale } from './time-scale';
 
 /** Most bins equalBins makes; more almost always means a unit slip (years given for Myr). */
 export const MAX_EQUAL_BINS = 100_000;
 
-// Boundaries are k × width. Rounding to 12 significant digits removes binary noise
-// (3 × 0.1 = 0.30000000000000004) so each boundary is the decimal multiple the user means.
-const SIGNIFICANT_DIGITS = 12;
-
-function decimal(x: number): number {
-  return Number(x.toPrecision(SIGNIFICANT_DIGITS));
-}
-
-/** An age in Ma as written in bin names: shortest decimal form, `0.3`, `120`. */
-export function formatMa(ageMa: number): string {
-  return String(decimal(ageMa));
-}
-
-function problems(widthMa: number, oldestMa: number, youngestMa: number): TimeInputProblem[] {
-  const found: TimeInputProblem[] = [];
+function problems(widthMa: number, oldestMa: number, youngestMa: number): InputProblem[] {
+  const found: InputProblem[] = [];
   if (!Number.isFinite(widthMa) || widthMa <= 0) {
     found.push({ field: 'equal', value: String(widthMa), expected: 'a bin width in Myr greater than 0' });
   }
@@ -38,17 +26,18 @@ function problems(widthMa: number, oldestMa: number, youngestMa: number): TimeIn
 /**
  * Bins `widthMa` Myr wide whose boundaries are multiples of the width (anchored at 0 Ma), just
  * enough of them to cover youngestMa..oldestMa. Oldest first, named like `120–110 Ma`, labelled
- * `equal:10`. Throws TimeInputError for a width that is not a positive number, a negative
+ * `equal:10`. Throws InputError for a width that is not a positive number, a negative
  * youngest age, an oldest age not older than the youngest, or more than MAX_EQUAL_BINS bins.
  */
 export function equalBins(widthMa: number, oldestMa: number, youngestMa = 0): TimeScale {
   const found = problems(widthMa, oldestMa, youngestMa);
-  if (found.length > 0) throw new TimeInputError(found);
-  const lowest = Math.floor(decimal(youngestMa / widthMa));
-  const highest = Math.ceil(decimal(oldestMa / widthMa));
+  if (found.length > 0) throw new InputError(found);
+  // Boundaries are k × width, each rounded to the decimal multiple the user means.
+  const lowest = Math.floor(decimalMa(youngestMa / widthMa));
+  const highest = Math.ceil(decimalMa(oldestMa / widthMa));
   const count = highest - lowest;
   if (count > MAX_EQUAL_BINS) {
-    throw new TimeInputError([
+    throw new InputError([
       {
         field: 'equal',
         value: formatMa(widthMa),
@@ -61,8 +50,8 @@ export function equalBins(widthMa: number, oldestMa: number, youngestMa = 0): Ti
   const topMa = new Float64Array(count);
   for (let i = 0; i < count; i++) {
     const k = highest - i;
-    baseMa[i] = decimal(k * widthMa);
-    topMa[i] = decimal((k - 1) * widthMa);
+    baseMa[i] = decimalMa(k * widthMa);
+    topMa[i] = decimalMa((k - 1) * widthMa);
     names.push(`${formatMa(baseMa[i])}–${formatMa(topMa[i])} Ma`);
   }
   return { label: `equal:${formatMa(widthMa)}`, names, baseMa, topMa };

@@ -20,19 +20,10 @@ export type AssignRule =
   | { readonly kind: 'overlap'; readonly fraction: number }
   | { readonly kind: 'random'; readonly seed: number };
 
-/** Why an occurrence went to no slice; stored per row as a small code. */
-export const UNASSIGNED_REASONS = [
-  'assigned',
-  'age outside the time scale',
-  'age range spans more than one slice',
-  'no slice holds the required share of the age range',
-] as const;
-export type UnassignedReasonCode = 0 | 1 | 2 | 3;
-
 export interface SliceAssignment {
   /** Slice index of each row, or -1 where none takes it. */
   readonly slice: Int32Array;
-  /** Index into UNASSIGNED_REASONS for each row (0 where assigned). */
+  /** Why each row went to no slice: the EXCLUSION_CODE of a slice-stage reason, NOT_EXCLUDED where assigned. */
   readonly reason: Uint8Array;
   /** Age used for the row (the midpoint, or the random draw), Ma; NaN where unassigned. */
   readonly age: Float64Array;

@@ -162,7 +162,7 @@ describe('rotation options and files that cannot be used', () => {
     ['a pole latitude beyond 90', `${HEADER}1,0,90,0,0,0\n1,10,95,0,5,0\n`, /poles\.csv cannot be used as a rotation model:\n.*poles\.csv line 3, pole_lat "95": expected a latitude from -90 to 90 degrees/],
     ['a missing column', 'plate_id,age_ma,pole_lat,pole_lon,angle_deg\n1,0,90,0,0\n', /poles\.csv line 1, relative_to "": expected a column named relative_to in the header/],
     ['two plates moving relative to each other', `${HEADER}1,10,0,0,5,2\n2,10,0,0,5,1\n3,10,0,0,5,0\n`, /1 → 2 → 1/],
-    ['an empty file', '', /poles\.csv: the file is empty; expected a header line/],
+    ['an empty file', '', /poles\.csv: line 1, header "": expected a header line naming the columns \(the file is empty\)/],
   ])('refuses a rotation model with %s, naming the file, line and field', async (_what, text, message) => {
     const path = poleFile(text);
     const run = await runCli('coverage', table, '--rotation', path, '--out', tempDir('bad-poles'));
@@ -176,7 +176,7 @@ describe('rotation options and files that cannot be used', () => {
     [['--rotation', 'assets/demo/poles.csv', '--beyond-model', 'ignore'], /--beyond-model "ignore": expected reject or clamp$/m],
     [['--prefer-model'], /--prefer-model needs a rotation model: add --rotation <poles\.csv>\./],
     [['--rotate-at', 'slice', '--beyond-model', 'clamp'], /--rotate-at, --beyond-model need a rotation model/],
-    [['--rotation', 'no-such-poles.csv'], /no-such-poles\.csv: cannot read no-such-poles\.csv/],
+    [['--rotation', 'no-such-poles.csv'], /no-such-poles\.csv: file "no-such-poles\.csv": expected a file that can be read \(ENOENT/],
   ])('refuses coverage %j with a message saying what was expected', async (args, message) => {
     const run = await runCli('coverage', table, ...args, '--out', tempDir('opt'));
     expect(run.status).toBe(1);

@@ -168,7 +168,7 @@ describe('the built command', () => {
   it('exits with status 1 and a one-line message, no stack trace, on a file it cannot read', () => {
     const child = spawnSync(process.execPath, ['bin/driftgrid.js', 'coverage', 'test/fixtures/bad/binary-garbage.bin', '--out', tempDir('spawn')], { encoding: 'utf8' });
     expect(child.status).toBe(1);
-    expect(child.stderr).toMatch(/^driftgrid: test\/fixtures\/bad\/binary-garbage\.bin: file looks binary/);
+    expect(child.stderr).toMatch(/^driftgrid: test\/fixtures\/bad\/binary-garbage\.bin: file "binary data \(a NUL byte at offset \d+\)": expected a CSV or TSV text file\n$/);
     expect(child.stderr).not.toMatch(/\n\s+at /);
   });
 

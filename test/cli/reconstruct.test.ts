@@ -258,7 +258,7 @@ describe('reconstruct inputs and options that cannot be used', () => {
     [['reconstruct', LAND, '--rotation', POLES, '--rotate-at', 'occurrence'], /--rotate-at applies to tables; assets\/demo\/land\.geojson is GeoJSON/],
     [['reconstruct', LAND, '--rotation', POLES, '--prefer-model'], /Unknown option '--prefer-model'/],
     [['reconstruct', 'assets/demo/poles.geojson', '--rotation', POLES], /assets\/demo\/poles\.geojson: cannot read it/],
-    [['reconstruct', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: the file is empty/],
+    [['reconstruct', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)/],
   ])('%j is refused with a message saying what was expected', async (args, message) => {
     const run = await runCli(...args, '--out', tempDir('reconstruct-opt'));
     expect(run.status).toBe(1);
@@ -273,8 +273,8 @@ describe('reconstruct inputs and options that cannot be used', () => {
     ]);
     const run = await runCli('reconstruct', path, '--rotation', POLES, '--out', tempDir('bad-geo'));
     expect(run.status).toBe(1);
-    expect(run.stderr).toMatch(/in\.geojson: feature 1: geometry type "Point"; expected Polygon or MultiPolygon/);
-    expect(run.stderr).toMatch(/in\.geojson: feature 2: plate_id is missing; expected a property plate_id/);
+    expect(run.stderr).toMatch(/in\.geojson, feature 1 geometry type "Point": expected Polygon or MultiPolygon/);
+    expect(run.stderr).toMatch(/in\.geojson, feature 2 plate_id "": expected a property plate_id, a whole number from 0 to 2147483647 \(plate_id is missing\)/);
   });
 
   it('refuses a file that is not JSON', async () => {

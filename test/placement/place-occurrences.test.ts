@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import {
-  DEFAULT_PLACEMENT, PLACEMENT_STATUS, describePlacementProblem, placeOccurrences, type PlacementSettings,
+  DEFAULT_PLACEMENT, PLACEMENT_STATUS, describeExclusion, placeOccurrences, type PlacementSettings,
 } from '../../src/placement';
 import type { RotationModel } from '../../src/rotation';
 import type { OccurrenceTable } from '../../src/table';
@@ -108,10 +108,10 @@ describe('placing rows on the palaeoglobe', () => {
   });
 
   it('names the plate, the age, the reach and the chain when a row is beyond the model', () => {
-    const problem = describePlacementProblem(PLACEMENT_STATUS.beyondModel, 2, 75, model, 'slice');
+    const problem = describeExclusion('beyondModel', 2, 75, model, 'slice');
     expect(problem.field).toBe('age');
     expect(problem.reason).toBe("the slice's mid-age 75 Ma is older than poles.csv reaches for plate 2 (back to 50 Ma, chain 2 → 1 → 0); expected an age of at most 50 Ma, or --beyond-model clamp");
-    expect(describePlacementProblem(PLACEMENT_STATUS.plateNotInModel, 9, 25, model, 'slice').reason)
+    expect(describeExclusion('plateNotInModel', 9, 25, model, 'slice').reason)
       .toBe('plate_id 9 is not in the rotation model poles.csv; expected one of its plates (1, 2; fixed plate 0)');
   });
 

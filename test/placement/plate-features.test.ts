@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { booleanClockwise } from '@turf/turf';
 import type { Feature, Polygon } from 'geojson';
 import { plateFeaturesOf } from '../../src/placement';
+import { InputError } from '../../src/problems';
 import { sliceFileName } from '../../src/export/slice-file-name';
 import { demoText } from '../demo/demo-files';
 
@@ -37,16 +38,16 @@ describe('reading base polygons for reconstruction', () => {
   });
 
   it.each([
-    ['a point feature', collection(feature({ plate_id: 1 }, { type: 'Point', coordinates: [0, 0] })), 'x.geojson: feature 1: geometry type "Point"; expected Polygon or MultiPolygon (points belong in a table)'],
-    ['a missing plate_id', collection(feature({ name: 'A' }, { type: 'Polygon', coordinates: [square(false)] })), 'x.geojson: feature 1: plate_id is missing; expected a property plate_id, a whole number from 0 to 2147483647'],
-    ['a fractional plate_id', collection(feature({ plate_id: 1.5 }, { type: 'Polygon', coordinates: [square(false)] })), 'plate_id 1.5; expected a property plate_id'],
-    ['an unclosed ring', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [square(false).slice(0, 4).concat([[0, 1]])] })), 'feature 1, ring 1: the last position [0,1] differs from the first [0,0]; expected a closed ring'],
-    ['a longitude beyond 180', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[0, 0], [190, 0], [0, 10], [0, 0]]] })), 'feature 1, ring 1, position 2 [190,0]: expected [longitude, latitude] in degrees'],
-    ['a ring across the antimeridian', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[170, 0], [-170, 0], [-170, 10], [170, 10], [170, 0]]] })), 'feature 1, ring 1: the edge from [170,0] to [-170,0] crosses the antimeridian; expected rings cut there into parts (RFC 7946 §3.1.9)'],
-    ['a property reconstruct adds', collection(feature({ plate_id: 1, slice: 3 }, { type: 'Polygon', coordinates: [square(false)] })), 'feature 1: already has a property "slice"'],
-    ['a ring without area', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[0, 0], [1, 1], [2, 2], [0, 0]]] })), 'feature 1, ring 1: the ring encloses no area'],
-    ['a bare geometry', { type: 'Polygon', coordinates: [square(false)] }, 'x.geojson: type "Polygon"; expected a FeatureCollection of Polygon or MultiPolygon features with a plate_id property'],
-    ['an empty collection', collection(), 'the FeatureCollection has no features'],
+    ['a point feature', collection(feature({ plate_id: 1 }, { type: 'Point', coordinates: [0, 0] })), 'x.geojson, feature 1 geometry type "Point": expected Polygon or MultiPolygon (points belong in a table)'],
+    ['a missing plate_id', collection(feature({ name: 'A' }, { type: 'Polygon', coordinates: [square(false)] })), 'x.geojson, feature 1 plate_id "": expected a property plate_id, a whole number from 0 to 2147483647 (plate_id is missing)'],
+    ['a fractional plate_id', collection(feature({ plate_id: 1.5 }, { type: 'Polygon', coordinates: [square(false)] })), 'x.geojson, feature 1 plate_id "1.5": expected a property plate_id, a whole number from 0 to 2147483647'],
+    ['an unclosed ring', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [square(false).slice(0, 4).concat([[0, 1]])] })), 'x.geojson, feature 1, ring 1, position 5 "[0,1]": expected a closed ring: the last position equal to the first, [0,0]'],
+    ['a longitude beyond 180', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[0, 0], [190, 0], [0, 10], [0, 0]]] })), 'x.geojson, feature 1, ring 1, position 2 "[190,0]": expected [longitude, latitude] in degrees, longitude from -180 to 180, latitude from -90 to 90'],
+    ['a ring across the antimeridian', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[170, 0], [-170, 0], [-170, 10], [170, 10], [170, 0]]] })), 'x.geojson, feature 1, ring 1, position 2 "[-170,0]": expected rings cut at the antimeridian into parts (RFC 7946 §3.1.9): the edge from [170,0] to here crosses it'],
+    ['a property reconstruct adds', collection(feature({ plate_id: 1, slice: 3 }, { type: 'Polygon', coordinates: [square(false)] })), 'x.geojson, feature 1 property slice "3": expected no property "slice": reconstruct adds it to every feature it writes, so rename it'],
+    ['a ring without area', collection(feature({ plate_id: 1 }, { type: 'Polygon', coordinates: [[[0, 0], [1, 1], [2, 2], [0, 0]]] })), 'x.geojson, feature 1, ring 1 "[[0,0],[1,1],[2,2],[0,0]]": expected a ring around an area (this ring encloses no area)'],
+    ['a bare geometry', { type: 'Polygon', coordinates: [square(false)] }, 'x.geojson, type "Polygon": expected a FeatureCollection of Polygon or MultiPolygon features with a plate_id property'],
+    ['an empty collection', collection(), 'x.geojson, features "[]": expected at least one feature (the FeatureCollection has none)'],
   ])('refuses %s, naming the feature and what was expected', (_what, input, message) => {
     expect(() => plateFeaturesOf(input, 'x.geojson')).toThrow(message);
   });
@@ -57,7 +58,19 @@ describe('reading base polygons for reconstruction', () => {
       feature({ plate_id: 2 }, { type: 'Polygon', coordinates: [square(false)] }),
       feature({}, { type: 'LineString', coordinates: [[0, 0], [1, 1]] }),
     );
-    expect(() => plateFeaturesOf(input, 'x.geojson')).toThrow(/feature 1: geometry type "Point"[^]*feature 3: plate_id is missing[^]*feature 3: geometry type "LineString"/);
+    expect(() => plateFeaturesOf(input, 'x.geojson')).toThrow(new InputError([
+      { field: 'feature 1 geometry type', value: 'Point', expected: 'Polygon or MultiPolygon (points belong in a table)' },
+      { field: 'feature 3 plate_id', value: '', expected: 'a property plate_id, a whole number from 0 to 2147483647 (plate_id is missing)' },
+      { field: 'feature 3 geometry type', value: 'LineString', expected: 'Polygon or MultiPolygon (points belong in a table)' },
+    ], { source: 'x.geojson' }));
+    try {
+      plateFeaturesOf(input, 'x.geojson');
+    } catch (error) {
+      expect(error).toBeInstanceOf(InputError);
+      expect((error as InputError).problems.map((p) => [p.field, p.value])).toEqual([
+        ['feature 1 geometry type', 'Point'], ['feature 3 plate_id', ''], ['feature 3 geometry type', 'LineString'],
+      ]);
+    }
   });
 });
 

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import geodesic from 'geographiclib-geodesic';
+import { InputError } from '../../src/problems';
 import {
-  BEYOND_MODEL, POLE_TABLE_COLUMNS, PoleTableError, ROTATION_STATUS, RotationLookupError, conjugateQuaternionInto,
+  BEYOND_MODEL, POLE_TABLE_COLUMNS, ROTATION_STATUS, RotationLookupError, conjugateQuaternionInto,
   createQuaternion, createRotationModel, multiplyQuaternionsInto, poleFromQuaternion, poleTableFromRecords,
   rotateVectorInto, type BeyondModel, type RotationModel,
 } from '../../src/rotation';
@@ -21,10 +22,10 @@ function problemsOf(lines: readonly string[]): string[] {
   try {
     modelOf(lines);
   } catch (error) {
-    if (error instanceof PoleTableError) return error.message.split('\n');
+    if (error instanceof InputError) return error.message.split('\n');
     throw error;
   }
-  throw new Error('expected a PoleTableError');
+  throw new Error('expected a InputError');
 }
 
 function moved(model: RotationModel, plate: number, age: number, lat: number, lon: number): [number, number, number] {

@@ -31,8 +31,8 @@ describe('reading a small table', () => {
   });
 
   it('refuses a blank first line, as the occurrence reader does, and an empty file', async () => {
-    await expect(readRecords(chunks('\nname,base_ma\n'))).rejects.toThrow('line 1 is blank; the first line must be the header naming the columns');
-    await expect(readRecords(chunks(''))).rejects.toThrow('the file is empty; expected a header line');
+    await expect(readRecords(chunks('\nname,base_ma\n'))).rejects.toThrow('line 1, header "": expected the header naming the columns on the first line (line 1 is blank)');
+    await expect(readRecords(chunks(''))).rejects.toThrow('line 1, header "": expected a header line naming the columns (the file is empty)');
   });
 
   it('reads CRLF line endings and quoted line breaks, numbering records by their first line', async () => {
@@ -45,7 +45,7 @@ describe('reading a small table', () => {
   });
 
   it('refuses malformed quoting with its line', async () => {
-    await expect(readRecords(chunks('name,note\nA,"x"y\nB,2\n'))).rejects.toThrow(/^line 2: malformed quoting/);
+    await expect(readRecords(chunks('name,note\nA,"x"y\nB,2\n'))).rejects.toThrow(/^line 2, row "A,\"x\"y": expected well-formed quoting/);
   });
 });
 

@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, TableReadError, mapColumns, matchSynonym, normaliseHeader } from '../../src/table/index';
+import { InputError } from '../../src/problems';
+import { COLUMN_SYNONYMS, OCCURRENCE_FIELDS, mapColumns, matchSynonym, normaliseHeader } from '../../src/table/index';
 
 function failure(header: string[], explicit?: Record<string, string>): string {
   try {
     mapColumns(header, explicit);
   } catch (err) {
-    expect(err).toBeInstanceOf(TableReadError);
+    expect(err).toBeInstanceOf(InputError);
     return (err as Error).message;
   }
   throw new Error('mapColumns accepted the header');
@@ -62,7 +63,7 @@ describe('mapColumns', () => {
 
   it('refuses a duplicated column name that matters, naming both positions', () => {
     expect(failure(['taxon', 'max_ma', 'min_ma', 'lat', 'lon', 'Lat'])).toMatch(
-      /^duplicate column name: column 4 \("lat"\) and column 6 \("Lat"\) both give lat; rename or remove one/,
+      /^line 1, header "Lat": expected one column for lat \(duplicate column name: column 4 \("lat"\) and column 6 \("Lat"\) both give lat; rename or remove one\)$/,
     );
   });
 
@@ -72,31 +73,32 @@ describe('mapColumns', () => {
 
   it('refuses two different synonyms for one field and says how to choose', () => {
     expect(failure(['genus', 'species', 'interval', 'lat', 'lon'])).toMatch(
-      /column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>/,
+      /^line 1, header "genus, species": expected one column for taxon \(column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>\)$/,
     );
   });
 
   it('lists the columns found and the names accepted for everything missing, all at once', () => {
     const message = failure(['name', 'age', 'x', 'y']);
     expect(message).toMatch(/no usable header/);
-    expect(message).toMatch(/columns found in the header \(line 1\): "name", "age", "x", "y"$/);
+    expect(message).toMatch(/^line 1, header "name, age, x, y": expected a first line naming the columns, separated by commas, tabs or semicolons \(fields: taxon, max_ma/);
     const missing = failure(['species', 'lat']);
-    expect(missing).toMatch(/no age columns: give max_ma and min_ma, or interval \(accepted names for max_ma: max_ma, max_age/);
-    expect(missing).toMatch(/a lat column but no lon column \(accepted names for lon: lon, lng, long, longitude/);
-    expect(missing).toMatch(/columns found in the header \(line 1\): "species", "lat"/);
+    expect(missing.split('\n')).toEqual([
+      expect.stringMatching(/^line 1, header "species, lat": expected age columns: max_ma and min_ma, or interval \(no age columns; accepted names for max_ma: max_ma, max_age/),
+      expect.stringMatching(/^line 1, header "species, lat": expected a lon column beside the lat column \(accepted names for lon: lon, lng, long, longitude/),
+    ]);
   });
 
   it('requires a taxon, an age source and a position source', () => {
-    expect(failure(['max_ma', 'min_ma', 'lat', 'lon'])).toMatch(/^no taxon column \(accepted names for taxon: taxon, taxon_name/);
-    expect(failure(['taxon', 'max_ma', 'lat', 'lon'])).toMatch(/a max_ma column but no min_ma column/);
-    expect(failure(['taxon', 'interval', 'collection'])).toMatch(/no position columns: give palaeo_lat and palaeo_lon, or lat and lon/);
+    expect(failure(['max_ma', 'min_ma', 'lat', 'lon'])).toMatch(/^line 1, header "max_ma, min_ma, lat, lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name/);
+    expect(failure(['taxon', 'max_ma', 'lat', 'lon'])).toMatch(/^line 1, header "taxon, max_ma, lat, lon": expected a min_ma column beside the max_ma column/);
+    expect(failure(['taxon', 'interval', 'collection'])).toMatch(/^line 1, header "taxon, interval, collection": expected position columns: palaeo_lat and palaeo_lon, or lat and lon/);
     expect(mapColumns(['taxon', 'interval', 'palaeo_lat', 'palaeo_lon']).index.interval).toBe(1);
   });
 
   it('explains explicit pairs that do not fit', () => {
-    expect(failure(['a', 'b'], { taxa: 'a' })).toMatch(/mapping taxa=a: "taxa" is not a field; fields are taxon, max_ma/);
-    expect(failure(['a', 'b'], { taxon: 'c' })).toMatch(/mapping taxon=c: no column is named "c"/);
-    expect(failure(['a', 'b'], { taxon: 'a', group: 'a' })).toMatch(/mapping group=a: column 1 \("a"\) is already mapped/);
-    expect(failure(['a', 'a'], { taxon: 'a' })).toMatch(/mapping taxon=a: column 1 \("a"\) and column 2 \("a"\) both match; rename one/);
+    expect(failure(['a', 'b'], { taxa: 'a' })).toMatch(/^mapping "taxa=a": expected a field before "=", one of taxon, max_ma, .* \("taxa" is not a field\)$/);
+    expect(failure(['a', 'b'], { taxon: 'c' })).toMatch(/^mapping "taxon=c": expected a column name after "=" that the header has \(no column is named "c"; columns found: "a", "b"\)$/);
+    expect(failure(['a', 'b'], { taxon: 'a', group: 'a' })).toMatch(/^mapping "group=a": expected a column no other field is mapped to \(column 1 \("a"\) is already mapped to another field\)$/);
+    expect(failure(['a', 'a'], { taxon: 'a' })).toMatch(/^mapping "taxon=a": expected a column name after "=" that one column has \(column 1 \("a"\) and column 2 \("a"\) both match; rename one\)$/);
   });
 });

@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import Papa from 'papaparse';
 import { describe, expect, it } from 'vitest';
-import { TableReadError, detectDelimiter } from '../../src/table/index';
+import { InputError } from '../../src/problems';
+import { detectDelimiter } from '../../src/table/index';
 import { csvTable, cut, scan, writeCsv } from './helpers';
 
 function caught(f: () => unknown): unknown {
@@ -107,27 +108,30 @@ describe('delimiter detection from the header line', () => {
 
 describe('failures', () => {
   it('names the line where an unclosed quoted field starts', () => {
-    expect(() => scan('a,b\nc,d\ne,"f\ng,h\n')).toThrow(/quoted field that starts on line 3 is never closed/);
+    expect(() => scan('a,b\nc,d\ne,"f\ng,h\n')).toThrow(/^line 3, row ""f…": expected a closing quote for the quoted field that starts on this line, which is never closed/);
     const error = caught(() => scan('a,b\n"c'));
-    expect(error).toBeInstanceOf(TableReadError);
-    expect((error as TableReadError).line).toBe(2);
+    expect(error).toBeInstanceOf(InputError);
+    expect((error as InputError).problems).toEqual([{
+      line: 2, field: 'row', value: '"c',
+      expected: 'a closing quote for the quoted field that starts on this line, which is never closed (unbalanced quote; a quote inside a quoted value is written as "")',
+    }]);
   });
 
   it('refuses a record longer than the limit, even when it arrives in small pieces', () => {
     const long = 'x'.repeat(100);
-    expect(() => scan(['a,b\n', long, long], { maxRecordChars: 150 })).toThrow(/line 2: a record longer than 150 characters/);
-    expect(() => scan(`a,b\n${long}\n`, { maxRecordChars: 50 })).toThrow(/line 2: a record longer than 50 characters/);
+    expect(() => scan(['a,b\n', long, long], { maxRecordChars: 150 })).toThrow(/^line 2, row "x{40}…": expected a record of at most 150 characters/);
+    expect(() => scan(`a,b\n${long}\n`, { maxRecordChars: 50 })).toThrow(/^line 2, row "x{40}…": expected a record of at most 50 characters/);
   });
 
   it('says a quoted field may be unbalanced when it stays open past the limit', () => {
     expect(() => scan(['a,b\nc,"', 'y'.repeat(80), 'y'.repeat(80)], { maxRecordChars: 100 })).toThrow(
-      /line 2: a quoted field starts here and is still open after 100 characters; check for an unbalanced quote/,
+      /^line 2, row "c,"y{37}…": expected a closing quote \("\) within 100 characters: a quoted field starts on this line and is still open; check for an unbalanced quote$/,
     );
   });
 
   it('blames a long record, not a quote, once a quoted field left open at a chunk end has closed', () => {
     expect(() => scan(['a,b\nc,"d', '"\n', 'x'.repeat(80), 'x'.repeat(80)], { maxRecordChars: 100 })).toThrow(
-      /line 3: a record longer than 100 characters/,
+      /^line 3, row "x{40}…": expected a record of at most 100 characters/,
     );
   });
 });

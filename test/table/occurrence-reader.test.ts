@@ -134,10 +134,11 @@ describe('rejected rows', () => {
 
 describe('tables that cannot be read', () => {
   it('refuses an empty text, a header without rows and a blank first line', () => {
-    expect(() => read('')).toThrow(/^the file is empty; expected a header line and data rows$/);
-    expect(() => read(HEADER)).toThrow(/^the file has a header but no data rows$/);
-    expect(() => read(HEADER + '\n\n')).toThrow(/^the file has a header but no data rows$/);
-    expect(() => read('\n' + HEADER + 'A,10,5,1,2,,,,,\n')).toThrow(/^line 1 is blank/);
+    expect(() => read('')).toThrow(/^line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)$/);
+    const noRows = /^line 2, row "": expected data rows after the header \(the file has a header but no data rows\)$/;
+    expect(() => read(HEADER)).toThrow(noRows);
+    expect(() => read(HEADER + '\n\n')).toThrow(noRows);
+    expect(() => read('\n' + HEADER + 'A,10,5,1,2,,,,,\n')).toThrow(/^line 1, header "": expected the header naming the columns on the first line \(line 1 is blank\)$/);
   });
 
   it('fails on the header before reading any row', () => {

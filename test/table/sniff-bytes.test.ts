@@ -20,26 +20,29 @@ describe('sniffBytes', () => {
   });
 
   it('recognises UTF-16 by its byte-order mark, either way round', () => {
-    expect(sniffBytes(bytes(0xff, 0xfe, 0x61, 0))).toBe('file looks like UTF-16 text; save it as UTF-8');
-    expect(sniffBytes(bytes(0xfe, 0xff, 0, 0x61))).toBe('file looks like UTF-16 text; save it as UTF-8');
+    const utf16Problem = { field: 'encoding', value: 'UTF-16 text', expected: 'UTF-8 text; save the file as UTF-8' };
+    expect(sniffBytes(bytes(0xff, 0xfe, 0x61, 0))).toEqual(utf16Problem);
+    expect(sniffBytes(bytes(0xfe, 0xff, 0, 0x61))).toEqual(utf16Problem);
   });
 
   it('recognises UTF-16 without a byte-order mark by its NUL bytes on one side', () => {
     const text = 'taxon,max_ma,min_ma\nAlpha,1,0\n';
-    expect(sniffBytes(utf16(text, true))).toMatch(/UTF-16/);
-    expect(sniffBytes(utf16(text, false))).toMatch(/UTF-16/);
+    expect(sniffBytes(utf16(text, true))?.value).toBe('UTF-16 text');
+    expect(sniffBytes(utf16(text, false))?.value).toBe('UTF-16 text');
   });
 
   it('recognises UTF-32, ZIP archives and gzip', () => {
-    expect(sniffBytes(bytes(0xff, 0xfe, 0, 0, 0x61, 0, 0, 0))).toMatch(/UTF-32/);
-    expect(sniffBytes(bytes(0x50, 0x4b, 3, 4, 20, 0))).toMatch(/ZIP archive/);
-    expect(sniffBytes(bytes(0x1f, 0x8b, 8, 0))).toMatch(/gzip/);
+    expect(sniffBytes(bytes(0xff, 0xfe, 0, 0, 0x61, 0, 0, 0))).toEqual({ field: 'encoding', value: 'UTF-32 text', expected: 'UTF-8 text; save the file as UTF-8' });
+    expect(sniffBytes(bytes(0x50, 0x4b, 3, 4, 20, 0))).toEqual({
+      field: 'file', value: 'a ZIP archive (a spreadsheet workbook is one)', expected: 'a CSV or TSV text file; save the sheet as CSV or TSV',
+    });
+    expect(sniffBytes(bytes(0x1f, 0x8b, 8, 0))).toEqual({ field: 'file', value: 'gzip-compressed data', expected: 'a CSV or TSV text file; decompress it first' });
   });
 
   it('calls text with scattered NUL bytes binary and names the first offset', () => {
     const data = ascii('abcdefgh');
     data[5] = 0;
-    expect(sniffBytes(data)).toBe('file looks binary (a NUL byte at offset 5); a CSV or TSV text file was expected');
+    expect(sniffBytes(data)).toEqual({ field: 'file', value: 'binary data (a NUL byte at offset 5)', expected: 'a CSV or TSV text file' });
   });
 });
 

@@ -6,7 +6,8 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { readBinsFile, readRawRecords, readRecordsFile, readTableFile } from '../../src/cli/read-table-file';
-import { ABSENT_CODE, NO_PLATE, TableReadError, type OccurrenceReadResult } from '../../src/table/index';
+import { InputError } from '../../src/problems';
+import { ABSENT_CODE, NO_PLATE, type OccurrenceReadResult } from '../../src/table/index';
 import { resolveStub } from './helpers';
 
 const FIXTURES = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures');
@@ -16,12 +17,12 @@ const GOOD = join(FIXTURES, 'good');
 const readFile = (path: string, chunkBytes?: number): Promise<OccurrenceReadResult> =>
   readTableFile(path, { resolveInterval: resolveStub, chunkBytes });
 
-async function failure(path: string): Promise<TableReadError> {
+async function failure(path: string): Promise<InputError> {
   try {
     await readFile(path);
   } catch (err) {
-    expect(err).toBeInstanceOf(TableReadError);
-    return err as TableReadError;
+    expect(err).toBeInstanceOf(InputError);
+    return err as InputError;
   }
   throw new Error(`${path} was read without an error`);
 }
@@ -37,23 +38,23 @@ type Expectation =
 
 /** What each file in test/fixtures/bad must give; README.md in that folder says the same in words. */
 const BAD_FIXTURES: Readonly<Record<string, Expectation>> = {
-  'empty.csv': { error: /^the file is empty; expected a header line and data rows$/ },
-  'header-only.csv': { error: /^the file has a header but no data rows$/ },
-  'blank-first-line.csv': { error: /^line 1 is blank; the first line must be the header naming the columns$/ },
-  'binary-garbage.bin': { error: /^file looks binary \(a NUL byte at offset \d+\); a CSV or TSV text file was expected$/ },
-  'zip-archive.xlsx': { error: /^file looks like a ZIP archive/ },
-  'utf16le-bom.csv': { error: /^file looks like UTF-16 text; save it as UTF-8$/ },
-  'utf16be-bom.csv': { error: /^file looks like UTF-16 text; save it as UTF-8$/ },
-  'utf16le-no-bom.csv': { error: /^file looks like UTF-16 text; save it as UTF-8$/ },
-  'invalid-utf8.csv': { error: /^line 3: invalid UTF-8 at byte (\d+) \(counting from 0\); save the file as UTF-8$/ },
-  'pipe-delimited.csv': { error: /^no usable header: .*\ncolumns found in the header \(line 1\): "taxon\|max_ma\|min_ma\|palaeo_lat\|palaeo_lon"$/s },
-  'unbalanced-quote.csv': { error: /^unbalanced quote: the quoted field that starts on line 3 is never closed/ },
-  'duplicate-header.csv': { error: /^duplicate column name: column 4 \("lat"\) and column 6 \("lat"\) both give lat; rename or remove one\n/ },
-  'ambiguous-columns.csv': { error: /^column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>\n/ },
-  'missing-taxon-column.csv': { error: /^no taxon column \(accepted names for taxon: taxon, taxon_name, .*\)\ncolumns found in the header \(line 1\): "name", /s },
-  'missing-age-columns.csv': { error: /^no age columns: give max_ma and min_ma, or interval \(accepted names for max_ma: max_ma, / },
-  'no-position-columns.csv': { error: /^no position columns: give palaeo_lat and palaeo_lon, or lat and lon \(\+ plate_id\) \(accepted names for palaeo_lat: / },
-  'half-position-pair.csv': { error: /^a palaeo_lat column but no palaeo_lon column \(accepted names for palaeo_lon: palaeo_lon, / },
+  'empty.csv': { error: /^line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)$/ },
+  'header-only.csv': { error: /^line 2, row "": expected data rows after the header \(the file has a header but no data rows\)$/ },
+  'blank-first-line.csv': { error: /^line 1, header "": expected the header naming the columns on the first line \(line 1 is blank\)$/ },
+  'binary-garbage.bin': { error: /^file "binary data \(a NUL byte at offset \d+\)": expected a CSV or TSV text file$/ },
+  'zip-archive.xlsx': { error: /^file "a ZIP archive \(a spreadsheet workbook is one\)": expected a CSV or TSV text file; save the sheet as CSV or TSV$/ },
+  'utf16le-bom.csv': { error: /^encoding "UTF-16 text": expected UTF-8 text; save the file as UTF-8$/ },
+  'utf16be-bom.csv': { error: /^encoding "UTF-16 text": expected UTF-8 text; save the file as UTF-8$/ },
+  'utf16le-no-bom.csv': { error: /^encoding "UTF-16 text": expected UTF-8 text; save the file as UTF-8$/ },
+  'invalid-utf8.csv': { error: /^line 3, encoding "invalid UTF-8 at byte (\d+) \(counting from 0\)": expected UTF-8 text; save the file as UTF-8$/ },
+  'pipe-delimited.csv': { error: /^line 1, header "taxon\|max_ma\|min_ma\|palaeo_lat\|palaeo_lon": expected a first line naming the columns, separated by commas, tabs or semicolons .*; no usable header/ },
+  'unbalanced-quote.csv': { error: /^line 3, row ""Gamma delta,.*": expected a closing quote for the quoted field that starts on this line, which is never closed/ },
+  'duplicate-header.csv': { error: /^line 1, header "lat": expected one column for lat \(duplicate column name: column 4 \("lat"\) and column 6 \("lat"\) both give lat; rename or remove one\)/ },
+  'ambiguous-columns.csv': { error: /^line 1, header "genus, species": expected one column for taxon \(column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>\)/ },
+  'missing-taxon-column.csv': { error: /^line 1, header "name, max_ma, min_ma, palaeo_lat, palaeo_lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name, / },
+  'missing-age-columns.csv': { error: /^line 1, header "taxon, palaeo_lat, palaeo_lon": expected age columns: max_ma and min_ma, or interval \(no age columns; accepted names for max_ma: max_ma, / },
+  'no-position-columns.csv': { error: /^line 1, header "taxon, max_ma, min_ma, collection": expected position columns: palaeo_lat and palaeo_lon, or lat and lon \(\+ plate_id\) \(no position columns; accepted names for palaeo_lat: / },
+  'half-position-pair.csv': { error: /^line 1, header "taxon, max_ma, min_ma, palaeo_lat, lat, lon": expected a palaeo_lon column beside the palaeo_lat column \(accepted names for palaeo_lon: palaeo_lon, / },
   'lat-91.csv': { accepted: 1, rejects: [[3, 'palaeo_lat', /^palaeo_lat "91" is out of range; expected decimal degrees from -90 to 90$/]] },
   'lon-abc.csv': { accepted: 1, rejects: [[3, 'palaeo_lon', /^palaeo_lon "abc" is not a number; expected decimal degrees from -180 to 180$/]] },
   'lon-181.csv': { accepted: 1, rejects: [[3, 'palaeo_lon', /^palaeo_lon "181" is out of range; expected decimal degrees from -180 to 180 \(longitudes from 0 to 360/]] },
@@ -126,13 +127,13 @@ describe('large bad files, generated at run time', () => {
   it('refuses a 10 MB single line early, as not a table', async () => {
     const path = join(dir, 'single-line.csv');
     await writeFile(path, 'x,'.repeat(5 * 1024 * 1024));
-    expect((await failure(path)).message).toMatch(/^line 1: a record longer than 1048576 characters; this does not look like a table/);
+    expect((await failure(path)).message).toMatch(/^line 1, row "(x,){20}…": expected a record of at most 1048576 characters; this does not look like a table with one record per line$/);
   });
 
   it('names the line of a quote left open across a large file', async () => {
     const path = join(dir, 'open-quote.csv');
     await writeFile(path, 'taxon,max_ma,min_ma,lat,lon\nA,1,0,1,1\n"B,1,0,1,1\n' + 'C,1,0,1,1\n'.repeat(200_000));
-    expect((await failure(path)).message).toMatch(/^line 3: a quoted field starts here and is still open after 1048576 characters/);
+    expect((await failure(path)).message).toMatch(/^line 3, row ""B,1,0,1,1…": expected a closing quote \("\) within 1048576 characters: a quoted field starts on this line and is still open/);
   });
 });
 
@@ -199,7 +200,7 @@ describe('good fixtures', () => {
   });
 
   it('says when the file cannot be opened', async () => {
-    await expect(readFile(join(GOOD, 'no-such-file.csv'))).rejects.toThrow(/^cannot read .*no-such-file\.csv: ENOENT/);
+    await expect(readFile(join(GOOD, 'no-such-file.csv'))).rejects.toThrow(/^file ".*no-such-file\.csv": expected a file that can be read \(ENOENT/);
   });
 });
 

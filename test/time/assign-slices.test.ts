@@ -1,7 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  UNASSIGNED_REASONS,
   assignSlices,
   assignSlicesInto,
   chartScale,
@@ -10,6 +9,7 @@ import {
   type AssignRule,
   type TimeScale,
 } from '../../src/time';
+import { EXCLUSIONS, EXCLUSION_CODE, EXCLUSION_STAGE, NOT_EXCLUDED } from '../../src/problems';
 
 // Boundary convention (docs DESIGN, "The export contract"): a slice covers top < age <= base, an age
 // on a boundary belongs to the younger unit, whose base it is (a boundary stratotype marks a base),
@@ -29,7 +29,7 @@ const ABC = scale([['A', 30, 20], ['B', 20, 10], ['C', 10, 0]]);
 // A (30, 20], gap 20..15, B (15, 5]: nothing reaches 0
 const GAPPED = scale([['A', 30, 20], ['B', 15, 5]]);
 
-const REASON = { outside: 1, spans: 2, share: 3 } as const;
+const REASON = { outside: EXCLUSION_CODE.ageOutside, spans: EXCLUSION_CODE.spansSlices, share: EXCLUSION_CODE.shareTooSmall } as const;
 
 function run(rule: AssignRule, ranges: ReadonlyArray<readonly [number, number]>, on: TimeScale = ABC) {
   const out = assignSlices(Float64Array.from(ranges, (r) => r[0]), Float64Array.from(ranges, (r) => r[1]), on, rule);
@@ -37,10 +37,11 @@ function run(rule: AssignRule, ranges: ReadonlyArray<readonly [number, number]>,
 }
 
 describe('the reason codes', () => {
-  it('match the texts of UNASSIGNED_REASONS', () => {
-    expect(UNASSIGNED_REASONS[REASON.outside]).toBe('age outside the time scale');
-    expect(UNASSIGNED_REASONS[REASON.spans]).toBe('age range spans more than one slice');
-    expect(UNASSIGNED_REASONS[REASON.share]).toBe('no slice holds the required share of the age range');
+  it('are slice-stage exclusions about the age, distinct from each other and from NOT_EXCLUDED', () => {
+    for (const name of ['ageOutside', 'spansSlices', 'shareTooSmall'] as const) {
+      expect(EXCLUSIONS[name]).toMatchObject({ stage: EXCLUSION_STAGE.slice, field: 'age' });
+    }
+    expect(new Set([NOT_EXCLUDED, REASON.outside, REASON.spans, REASON.share]).size).toBe(4);
   });
 });
 
@@ -74,7 +75,7 @@ describe('the midpoint rule', () => {
     // [12, 24] → 18 in B; [20, 40] → 30 on A's base; [28, 36] → 32, older than the scale
     expect(run({ kind: 'midpoint' }, [[24, 12], [40, 20], [36, 28]])).toEqual({
       slice: [1, 0, -1],
-      reason: [0, 0, REASON.outside],
+      reason: [NOT_EXCLUDED, NOT_EXCLUDED, REASON.outside],
       age: [18, 30, Number.NaN],
     });
   });

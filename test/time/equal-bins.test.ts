@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { MAX_EQUAL_BINS, TimeInputError, equalBins } from '../../src/time';
+import { MAX_EQUAL_BINS, equalBins } from '../../src/time';
+import { InputError } from '../../src/problems';
 
 // Equal bins are plain arithmetic (boundaries at k × width, anchored at 0 Ma, common practice);
 // the checks below are worked by hand and by invariant.
@@ -53,7 +54,7 @@ describe('equal bins', () => {
   });
 
   it('refuses a width that would make more than MAX_EQUAL_BINS bins', () => {
-    expect(() => equalBins(0.001, 541)).toThrow(TimeInputError);
+    expect(() => equalBins(0.001, 541)).toThrow(InputError);
     expect(() => equalBins(0.001, 541)).toThrow(`at most ${MAX_EQUAL_BINS} bins`);
   });
 });

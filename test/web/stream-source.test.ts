@@ -16,7 +16,7 @@ describe('reading a picked file in the worker', () => {
 
   it('names the line and byte of invalid UTF-8 instead of replacing it', async () => {
     const bytes = new Uint8Array([...new TextEncoder().encode('a,b\r\nc,d\n'), 0x41, 0xff, 0x0a]);
-    await expect(collect(new Blob([bytes]))).rejects.toThrow('line 3: invalid UTF-8 at byte 10');
+    await expect(collect(new Blob([bytes]))).rejects.toThrow('line 3, encoding "invalid UTF-8 at byte 10 (counting from 0)": expected UTF-8 text; save the file as UTF-8');
   });
 
   it('refuses UTF-16 from its byte-order mark', async () => {

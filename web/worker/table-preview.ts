@@ -1,5 +1,6 @@
 /** The first rows of a table and the columns the reader would use: the import's mapping step. */
-import { TableReadError, createCsvScanner, mapColumns, OCCURRENCE_FIELDS, recordFields, sniffBytes } from '../../src/table';
+import { InputError } from '../../src/problems';
+import { createCsvScanner, mapColumns, OCCURRENCE_FIELDS, recordFields, sniffBytes } from '../../src/table';
 import { PREVIEW_ROWS, type TablePreview } from '../protocol';
 
 /** Bytes looked at: enough for a header and the preview rows of any sane table. */
@@ -8,7 +9,7 @@ const PREVIEW_BYTES = 256 * 1024;
 export async function tablePreview(blob: Blob, name: string): Promise<TablePreview> {
   const head = new Uint8Array(await blob.slice(0, PREVIEW_BYTES).arrayBuffer());
   const refused = sniffBytes(head);
-  if (refused !== undefined) throw new TableReadError(refused);
+  if (refused !== undefined) throw new InputError([refused]);
   // The slice may end inside a character or a record: decode leniently and scan whole lines only.
   let text = new TextDecoder('utf-8').decode(head);
   if (blob.size > PREVIEW_BYTES) text = text.slice(0, Math.max(0, text.lastIndexOf('\n')));
