@@ -30,7 +30,7 @@ function stem(rng: Rng, syllables: number): string {
 }
 
 /** A name not yet in `taken` (which it joins), from the stem maker and an ending. */
-function uniqueName(rng: Rng, taken: Set<string>, make: () => string): string {
+function uniqueName(taken: Set<string>, make: () => string): string {
   for (;;) {
     const name = capitalise(make());
     if (!taken.has(name)) {
@@ -41,13 +41,13 @@ function uniqueName(rng: Rng, taken: Set<string>, make: () => string): string {
 }
 
 export function genusName(rng: Rng, taken: Set<string>): string {
-  return uniqueName(rng, taken, () => stem(rng, 2) + pick(rng, GENUS_ENDINGS));
+  return uniqueName(taken, () => stem(rng, 2) + pick(rng, GENUS_ENDINGS));
 }
 
 export function cladeName(rng: Rng, taken: Set<string>): string {
-  return uniqueName(rng, taken, () => stem(rng, 2) + pick(rng, CLADE_ENDINGS));
+  return uniqueName(taken, () => stem(rng, 2) + pick(rng, CLADE_ENDINGS));
 }
 
 export function landName(rng: Rng, taken: Set<string>): string {
-  return uniqueName(rng, taken, () => stem(rng, 2) + pick(rng, LAND_ENDINGS));
+  return uniqueName(taken, () => stem(rng, 2) + pick(rng, LAND_ENDINGS));
 }

@@ -149,7 +149,7 @@ class Scanner implements CsvScanner {
   private scanQuoted(final: boolean): boolean {
     const q = this.quoted;
     const v = this.view;
-    if (scanQuotedSpans(this.buf, this.pos, this.line, this.delim, final, v, q)) {
+    if (scanQuotedSpans(this.buf, this.pos, this.line, this.delim, v, q)) {
       v.text = this.buf;
     } else {
       const values = this.values;

@@ -96,7 +96,7 @@ export function scanQuotedRecord(
  * field, or a record that runs past the end of `text`.
  */
 export function scanQuotedSpans(
-  text: string, start: number, line: number, delim: number, final: boolean,
+  text: string, start: number, line: number, delim: number,
   view: RecordView, out: QuotedRecordState,
 ): boolean {
   const n = text.length;

@@ -5,7 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
 import { geoArea, geoContains } from 'd3-geo';
 import { booleanClockwise } from '@turf/turf';
-import type { Feature, FeatureCollection, MultiPolygon, Polygon, Position } from 'geojson';
+import type { FeatureCollection, MultiPolygon, Polygon, Position } from 'geojson';
 import { chartScale } from '../../src/time';
 import { angleBetweenDeg, unit } from '../rotation/rodrigues';
 import { runCli } from './run-cli';
@@ -18,7 +18,6 @@ const LAND = 'assets/demo/land.geojson';
 /** The demo model reaches back to 300 Ma for every plate (assets/demo/README.md). */
 const DEMO_REACH_MA = 300;
 
-type Land = Feature<Polygon | MultiPolygon, Record<string, unknown>>;
 const polygonsOf = (g: Polygon | MultiPolygon): Position[][][] => (g.type === 'Polygon' ? [g.coordinates] : g.coordinates);
 /** d3-geo reads a ring clockwise around its area, the reverse of RFC 7946 (STACK.md): rewind. */
 const d3Polygons = (g: Polygon | MultiPolygon): Polygon[] => polygonsOf(g).map((rings) => ({ type: 'Polygon', coordinates: rings.map((r) => [...r].reverse()) }));

@@ -1,6 +1,5 @@
 /** Reading the user's files in the worker: the occurrence table (streamed) and the optional inputs. */
 import { plateFeaturesOf, type PlateFeature } from '../../src/placement';
-import { InputError } from '../../src/problems';
 import { poleTableFromRecords, type PoleTable } from '../../src/rotation';
 import { readRecords } from '../../src/run';
 import { createOccurrenceReader, type OccurrenceReadResult } from '../../src/table';
