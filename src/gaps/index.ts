@@ -1,0 +1,10 @@
+export { AREA_KINDS, type AvailableArea, availableCells } from './available-cells';
+export { type CellAdjacency, cellAdjacency } from './cell-adjacency';
+export { buildCellMesh, type CellMesh, GAP_EDGE_STEP_DEG } from './cell-mesh';
+export { earthMoversDistanceSorted } from './earth-movers-distance';
+export { type GapGrid, prepareGapGrid } from './gap-grid';
+export { gapOutlines } from './gap-outlines';
+export { type GapSummary, gapsBySlice, gapSummary, type OccupiedCells, occupiedCellsOf } from './gap-summary';
+export { type BeltInputs, DEFAULT_BELT_DEG, type LatitudeBelts, latitudeBelts } from './latitude-belts';
+export { type SliceGaps, sliceGaps } from './slice-gaps';
+export { prepareSphericalPolygons, pointsInSphericalPolygons, type SphericalPolygons } from './spherical-polygons';
