@@ -7,16 +7,20 @@
  * SnappedVertices). The gap is on the left of every ring: exteriors run anticlockwise, holes
  * clockwise (RFC 7946 §3.1.6).
  *
- * Where two cells of a gap meet only at a corner, the walk turns towards the cells outside
- * the gap (it takes the first boundary edge met turning anticlockwise from the way it came),
- * so a ring never passes a vertex twice: a hole that touches its exterior does so at a point,
- * as the OGC simple-features rules allow.
+ * Where two cells of a gap meet only at a corner (a pinch), the walk keeps to the cell it came
+ * along (it takes the first boundary edge met turning clockwise from the way back) and the
+ * corner is drawn PINCH_CLIP_DEG inside that cell, so that no ring passes a point twice and no
+ * two rings of a polygon touch: turf's kinks counts even a touch at one point, and OGC's rules
+ * forbid a ring that touches itself. The corner cut off is a triangle of about PINCH_CLIP_DEG²
+ * square degrees, far below what the positions' six decimals resolve in area.
  */
 import type { MultiPolygon, Polygon, Position } from 'geojson';
 import type { GapGrid } from './gap-grid';
 import type { SliceGaps } from './slice-gaps';
 
 const TWO_PI = 2 * Math.PI;
+/** How far a pinched corner is drawn inside its cell, degrees: ten units of the last decimal written. */
+const PINCH_CLIP_DEG = 1e-5;
 
 /** One geometry per gap, in the order of `gaps`: a Polygon, or a MultiPolygon where the cut or a
  * pole line divides the gap into parts in the plane. */
@@ -42,6 +46,9 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     firstOut[v] = b;
   }
   const seen = new Uint8Array(boundary.length);
+  /** Boundary edges of the ring being walked, in order, and the drawn corners of pinches where they start. */
+  const order: number[] = [];
+  const pinched = new Map<number, Position>();
   /** Per gap, per planar part: [exterior, ...holes] as they are found. */
   const polygons: Array<Map<number, { exterior?: Position[]; holes: Position[][] }>> = Array.from({ length: gaps.gapCount }, () => new Map());
   for (let b0 = 0; b0 < boundary.length; b0++) {
@@ -50,19 +57,34 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     let twiceArea = 0;
     for (let b = b0; seen[b] === 0; ) {
       seen[b] = 1;
+      order.push(b);
       const e = boundary[b];
       ring.push([vertexLon[from[e]], vertexLat[from[e]]]);
       twiceArea += vertexLon[from[e]] * vertexLat[to[e]] - vertexLon[to[e]] * vertexLat[from[e]];
-      b = nextBoundary(e, firstOut[to[e]]);
+      const first = firstOut[to[e]];
+      b = nextOut[first] < 0 ? first : pinchedNext(e, first);
+      if (nextOut[first] >= 0) {
+        // A pinch: the corner at to[e] is drawn inside the cell (the next position, or the first when closing).
+        const corner = clippedCorner(from[e], to[e], to[boundary[b]]);
+        if (b === b0) ring[0] = corner;
+        else pinched.set(b, corner);
+      }
     }
-    ring.push([ring[0][0], ring[0][1]]);
+    for (let k = 1; k < ring.length; k++) {
+      const corner = pinched.get(order[k]);
+      if (corner !== undefined) ring[k] = corner;
+    }
+    order.length = 0;
+    pinched.clear();
+    const closed = withoutPoleRuns(ring);
+    closed.push([closed[0][0], closed[0][1]]);
     const e0 = boundary[b0];
     const parts = polygons[gapOf[pieceCell[piece[e0]]]];
     const part = partOf[piece[e0]];
     const polygon = parts.get(part) ?? { holes: [] };
     parts.set(part, polygon);
-    if (twiceArea > 0) polygon.exterior = ring;
-    else polygon.holes.push(ring);
+    if (twiceArea > 0) polygon.exterior = closed;
+    else polygon.holes.push(closed);
   }
   return polygons.map((parts, gap) => {
     const coordinates = [...parts.values()].map(({ exterior, holes }) => {
@@ -72,16 +94,15 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     return coordinates.length === 1 ? { type: 'Polygon', coordinates: coordinates[0] } : { type: 'MultiPolygon', coordinates };
   });
 
-  /** The boundary edge to follow edge e: of those leaving its end, the first met turning
-   * anticlockwise from the way back (a single one is taken as it is). */
-  function nextBoundary(e: number, first: number): number {
-    if (nextOut[first] < 0) return first;
+  /** Of several boundary edges leaving the end of edge e, the first met turning clockwise
+   * from the way back, which keeps to the cell e belongs to. */
+  function pinchedNext(e: number, first: number): number {
     const v = to[e];
     const back = Math.atan2(vertexLat[from[e]] - vertexLat[v], vertexLon[from[e]] - vertexLon[v]);
     let best = first, bestTurn = Infinity;
     for (let b = first; b >= 0; b = nextOut[b]) {
       const w = to[boundary[b]];
-      let turn = Math.atan2(vertexLat[w] - vertexLat[v], vertexLon[w] - vertexLon[v]) - back;
+      let turn = back - Math.atan2(vertexLat[w] - vertexLat[v], vertexLon[w] - vertexLon[v]);
       turn -= TWO_PI * Math.floor(turn / TWO_PI);
       if (turn === 0) turn = TWO_PI;
       if (turn < bestTurn) {
@@ -91,6 +112,32 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     }
     return best;
   }
+
+  /** Corner v between edges u → v and v → w moved PINCH_CLIP_DEG into the angle they make. */
+  function clippedCorner(u: number, v: number, w: number): Position {
+    const x = vertexLon[v], y = vertexLat[v];
+    const ux = vertexLon[u] - x, uy = vertexLat[u] - y, wx = vertexLon[w] - x, wy = vertexLat[w] - y;
+    const lu = Math.hypot(ux, uy), lw = Math.hypot(wx, wy);
+    const bx = ux / lu + wx / lw, by = uy / lu + wy / lw;
+    const lb = Math.hypot(bx, by);
+    return [x + (PINCH_CLIP_DEG * bx) / lb, y + (PINCH_CLIP_DEG * by) / lb];
+  }
+}
+
+/**
+ * The ring (open, not repeating its first position) without the inner positions of runs along a
+ * pole line: several cells' pole lines in a row make one, which a planar reader needs once and
+ * a reader on the sphere not at all (s2 reads a run of positions on a pole as a chain of
+ * near-zero edges; see test/export/polygon-checks.ts).
+ */
+function withoutPoleRuns(ring: Position[]): Position[] {
+  const n = ring.length;
+  const onPoleLine = (i: number) => {
+    const lat = ring[(i + n) % n][1];
+    return Math.abs(lat) === 90 && ring[(i + n - 1) % n][1] === lat && ring[(i + 1) % n][1] === lat;
+  };
+  const kept = ring.filter((_, i) => !onPoleLine(i));
+  return kept.length >= 3 ? kept : ring;
 }
 
 /** Label of each gap piece's planar part: pieces of gap cells joined through twin edges. */
