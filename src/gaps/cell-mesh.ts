@@ -9,7 +9,7 @@
  * of the plane (the cut at ±180°, the pole lines at ±90°); any other edge without one means the
  * outlines do not fit together, and building the mesh fails.
  */
-import { splitAtAntimeridian } from '../export/split-antimeridian';
+import { splitAtAntimeridian } from '../sphere/split-antimeridian';
 import type { EqualAreaGrid } from '../grid/equal-area-grid';
 import { SnappedVertices } from './snapped-vertices';
 

@@ -3,6 +3,7 @@
  * of its cell outlines, which cells share an edge, and each cell's centre.
  */
 import type { EqualAreaGrid } from '../grid/equal-area-grid';
+import { degreesToUnitVectors } from '../sphere/unit-vectors';
 import { type CellAdjacency, cellAdjacency } from './cell-adjacency';
 import { buildCellMesh, type CellMesh } from './cell-mesh';
 
@@ -13,6 +14,8 @@ export interface GapGrid {
   /** Centre of each cell (grid.cellCentreInto), degrees. */
   readonly centreLat: Float64Array;
   readonly centreLon: Float64Array;
+  /** The centres as unit vectors, interleaved [x0, y0, z0, x1, …]. */
+  readonly centreXyz: Float64Array;
 }
 
 export function prepareGapGrid(grid: EqualAreaGrid): GapGrid {
@@ -24,5 +27,5 @@ export function prepareGapGrid(grid: EqualAreaGrid): GapGrid {
     centreLat[cell] = centre[0];
     centreLon[cell] = centre[1];
   }
-  return { grid, mesh, adjacency: cellAdjacency(mesh), centreLat, centreLon };
+  return { grid, mesh, adjacency: cellAdjacency(mesh), centreLat, centreLon, centreXyz: degreesToUnitVectors(centreLat, centreLon) };
 }

@@ -30,10 +30,10 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
   for (let gap = 0; gap < gaps.gapCount; gap++) {
     for (let k = gaps.cellStart[gap]; k < gaps.cellStart[gap + 1]; k++) gapOf[gaps.cells[k]] = gap;
   }
-  const partOf = planarParts(g, gaps, gapOf);
   // Boundary half-edges, and for each vertex the list of those leaving it.
   const boundary: number[] = [];
-  for (const cell of gaps.cells) {
+  for (let k = 0; k < gaps.cells.length; k++) {
+    const cell = gaps.cells[k];
     for (let e = pieceEdgeStart[cellPieceStart[cell]]; e < pieceEdgeStart[cellPieceStart[cell + 1]]; e++) {
       if (twin[e] < 0 || gapOf[pieceCell[piece[twin[e]]]] < 0) boundary.push(e);
     }
@@ -49,8 +49,8 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
   /** Boundary edges of the ring being walked, in order, and the drawn corners of pinches where they start. */
   const order: number[] = [];
   const pinched = new Map<number, Position>();
-  /** Per gap, per planar part: [exterior, ...holes] as they are found. */
-  const polygons: Array<Map<number, { exterior?: Position[]; holes: Position[][] }>> = Array.from({ length: gaps.gapCount }, () => new Map());
+  /** Per gap, its rings as found: exteriors and holes, each with the piece of its first edge. */
+  const ringsOf = Array.from({ length: gaps.gapCount }, () => ({ exteriors: [] as Found[], holes: [] as Found[] }));
   for (let b0 = 0; b0 < boundary.length; b0++) {
     if (seen[b0] !== 0) continue;
     const ring: Position[] = [];
@@ -79,19 +79,22 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     const closed = withoutPoleRuns(ring);
     closed.push([closed[0][0], closed[0][1]]);
     const e0 = boundary[b0];
-    const parts = polygons[gapOf[pieceCell[piece[e0]]]];
-    const part = partOf[piece[e0]];
-    const polygon = parts.get(part) ?? { holes: [] };
-    parts.set(part, polygon);
-    if (twiceArea > 0) polygon.exterior = closed;
-    else polygon.holes.push(closed);
+    const found = ringsOf[gapOf[pieceCell[piece[e0]]]];
+    (twiceArea > 0 ? found.exteriors : found.holes).push({ ring: closed, piece: piece[e0] });
   }
-  return polygons.map((parts, gap) => {
-    const coordinates = [...parts.values()].map(({ exterior, holes }) => {
-      if (exterior === undefined) throw new Error(`Gap ${gap + 1}: a part of its outline has holes but no exterior.`);
-      return [exterior, ...holes];
-    });
-    return coordinates.length === 1 ? { type: 'Polygon', coordinates: coordinates[0] } : { type: 'MultiPolygon', coordinates };
+  return ringsOf.map(({ exteriors, holes }, gap) => {
+    if (exteriors.length === 1) return { type: 'Polygon', coordinates: [exteriors[0].ring, ...holes.map((h) => h.ring)] };
+    // Several parts in the plane (cut at the antimeridian or along a pole line): each hole goes
+    // with the exterior of the part its piece is joined to.
+    const partOf = planarParts(g, gaps, gap, gapOf);
+    const coordinates = exteriors.map((exterior) => [exterior.ring]);
+    const slot = new Map(exteriors.map((exterior, k) => [partOf[exterior.piece], k]));
+    for (const hole of holes) {
+      const k = slot.get(partOf[hole.piece]);
+      if (k === undefined) throw new Error(`Gap ${gap + 1}: a hole of its outline lies in no part with an exterior.`);
+      coordinates[k].push(hole.ring);
+    }
+    return { type: 'MultiPolygon', coordinates };
   });
 
   /** Of several boundary edges leaving the end of edge e, the first met turning clockwise
@@ -140,13 +143,19 @@ function withoutPoleRuns(ring: Position[]): Position[] {
   return kept.length >= 3 ? kept : ring;
 }
 
-/** Label of each gap piece's planar part: pieces of gap cells joined through twin edges. */
-function planarParts(g: GapGrid, gaps: SliceGaps, gapOf: Int32Array): Int32Array {
+interface Found {
+  readonly ring: Position[];
+  readonly piece: number;
+}
+
+/** Label of each piece of gap `gap` by planar part: its pieces joined through twin edges. */
+function planarParts(g: GapGrid, gaps: SliceGaps, gap: number, gapOf: Int32Array): Int32Array {
   const { twin, piece, pieceCell, cellPieceStart, pieceEdgeStart } = g.mesh;
   const label = new Int32Array(pieceCell.length).fill(-1);
   const queue: number[] = [];
   let parts = 0;
-  for (const cell of gaps.cells) {
+  for (let k = gaps.cellStart[gap]; k < gaps.cellStart[gap + 1]; k++) {
+    const cell = gaps.cells[k];
     for (let p0 = cellPieceStart[cell]; p0 < cellPieceStart[cell + 1]; p0++) {
       if (label[p0] >= 0) continue;
       label[p0] = parts;

@@ -75,15 +75,18 @@ export function sliceGaps(g: GapGrid, available: Uint8Array, occupied: Uint32Arr
   const gapCount = starts.length - 1;
   const cellKm2 = g.grid.cellAreaSr * EARTH_RADIUS_KM * EARTH_RADIUS_KM;
   const areaKm2 = new Float64Array(gapCount), centreLat = new Float64Array(gapCount), centreLon = new Float64Array(gapCount);
-  const lat = new Float64Array(cells.length), lon = new Float64Array(cells.length);
+  const xyz = new Float64Array(3 * cells.length);
+  const centres = g.centreXyz;
   for (let k = 0; k < cells.length; k++) {
-    lat[k] = g.centreLat[cells[k]];
-    lon[k] = g.centreLon[cells[k]];
+    const o = 3 * cells[k];
+    xyz[3 * k] = centres[o];
+    xyz[3 * k + 1] = centres[o + 1];
+    xyz[3 * k + 2] = centres[o + 2];
   }
   for (let gap = 0; gap < gapCount; gap++) {
     const from = starts[gap], to = starts[gap + 1];
     areaKm2[gap] = (to - from) * cellKm2;
-    const centre = sphericalCentroid(lat.subarray(from, to), lon.subarray(from, to));
+    const centre = sphericalCentroid(xyz.subarray(3 * from, 3 * to));
     centreLat[gap] = centre.latDeg;
     centreLon[gap] = centre.lonDeg;
   }
