@@ -121,7 +121,9 @@ export function gapOutlines(g: GapGrid, gaps: SliceGaps): Array<Polygon | MultiP
     const x = vertexLon[v], y = vertexLat[v];
     const ux = vertexLon[u] - x, uy = vertexLat[u] - y, wx = vertexLon[w] - x, wy = vertexLat[w] - y;
     const lu = Math.hypot(ux, uy), lw = Math.hypot(wx, wy);
-    const bx = ux / lu + wx / lw, by = uy / lu + wy / lw;
+    let bx = ux / lu + wx / lw, by = uy / lu + wy / lw;
+    // Edges in one line (a straight angle): into the cell is to the left of the way in.
+    if (Math.hypot(bx, by) < 1e-9) [bx, by] = [uy / lu, -ux / lu];
     const lb = Math.hypot(bx, by);
     return [x + (PINCH_CLIP_DEG * bx) / lb, y + (PINCH_CLIP_DEG * by) / lb];
   }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { COMMON_INDICATOR_KINDS, commonIndicatorKind, summariseIndicators } from '../../src/indicators';
+import { OVERLAY_COLOURS } from '../../web/colour/layer-colours';
 
 describe('common indicator kinds', () => {
   it.each([
@@ -18,6 +19,13 @@ describe('common indicator kinds', () => {
     expect(new Set(COMMON_INDICATOR_KINDS.map((k) => k.symbol)).size).toBe(COMMON_INDICATOR_KINDS.length);
     expect(new Set(COMMON_INDICATOR_KINDS.map((k) => k.colour)).size).toBe(COMMON_INDICATOR_KINDS.length);
     for (const k of COMMON_INDICATOR_KINDS) expect(k.colour).toMatch(/^#[0-9A-F]{6}$/);
+  });
+
+  it("use neither of the colours the map draws the hull and the spanning tree in", () => {
+    const hex = (rgb: readonly number[]) => `#${rgb.map((v) => v.toString(16).padStart(2, '0')).join('').toUpperCase()}`;
+    const taken = [hex(OVERLAY_COLOURS.hull), hex(OVERLAY_COLOURS.spanningTree)];
+    expect(taken).toEqual(['#E69F00', '#D55E00']); // Okabe & Ito's orange and vermillion
+    for (const k of COMMON_INDICATOR_KINDS) expect(taken).not.toContain(k.colour);
   });
 
   it('name no plain name under two kinds', () => {
