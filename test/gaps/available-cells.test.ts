@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
 import { geoArea, geoContains } from 'd3-geo';
 import type { MultiPolygon, Polygon, Position } from 'geojson';
 import { parseGridName } from '../../src/grid';
@@ -69,6 +70,29 @@ describe('points in polygons on the sphere', () => {
       expect(wrong).toEqual([]);
       expect(inside).toBeGreaterThan(0);
     }
+  });
+
+  it('agree with d3-geo geoContains for random quadrilaterals anywhere, written either way', () => {
+    const angle = fc.double({ min: 0, max: 2 * Math.PI, noNaN: true });
+    fc.assert(fc.property(
+      fc.double({ min: -90, max: 90, noNaN: true }), fc.double({ min: -180, max: 180, noNaN: true }), fc.double({ min: 1, max: 70, noNaN: true }),
+      fc.tuple(angle, angle, angle, angle), fc.boolean(),
+      (clat, clon, radius, turns, clockwise) => {
+        // Four vertices at `radius` from a centre, in order of bearing: a simple ring.
+        const bearings = [...turns].sort((a, b) => a - b);
+        const c = (clat * Math.PI) / 180, r = (radius * Math.PI) / 180;
+        const ring: Position[] = bearings.map((b) => {
+          const lat = Math.asin(Math.sin(c) * Math.cos(r) + Math.cos(c) * Math.sin(r) * Math.cos(b));
+          const lon = clon + (Math.atan2(Math.sin(b) * Math.sin(r) * Math.cos(c), Math.cos(r) - Math.sin(c) * Math.sin(lat)) * 180) / Math.PI;
+          return [((lon + 540) % 360) - 180, (lat * 180) / Math.PI];
+        });
+        ring.push([...ring[0]]);
+        const geometry: Polygon = { type: 'Polygon', coordinates: [clockwise ? ring : reversed(ring)] };
+        const ours = pointsInSphericalPolygons(prepareSphericalPolygons([geometry], 'area'), lat, lon, new Uint8Array(lat.length));
+        const d3 = forD3(geometry);
+        for (let i = 0; i < lat.length; i += 4) expect([i, ours[i] === 1]).toEqual([i, geoContains(d3, [lon[i], lat[i]])]);
+      },
+    ), { numRuns: 60 });
   });
 
   it('read a ring written either way as the same area', () => {

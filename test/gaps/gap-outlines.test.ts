@@ -146,6 +146,16 @@ describe.each(['healpix:4', 'healpix:8', 'healpix:16', 'bands:10', 'bands:15'])(
   });
 });
 
+describe('the classes of a slice', () => {
+  it('count sampled cells inside the area as sampled and those outside apart, as neither gap nor sample', () => {
+    const g = gapGrid('healpix:2');
+    const available = new Uint8Array(g.grid.cellCount);
+    available.fill(1, 0, 10);
+    const gaps = sliceGaps(g, available, Uint32Array.of(1, 2, 20, 30));
+    expect([gaps.availableCells, gaps.sampledCells, gaps.sampledOutsideCells, gaps.cells.length]).toEqual([10, 2, 2, 8]);
+  });
+});
+
 describe('gapsBySlice', () => {
   it('takes one mask for all slices or one per slice, and refuses a wrong number of masks', () => {
     const g = gapGrid('healpix:2');
