@@ -7,6 +7,7 @@ import type { SliceCollections } from './slice-collections';
 import { sliceRandom, uniformBelow } from './slice-seed';
 import { mean, sampleSd } from './quantile';
 import { cellMembers, type CellMembers } from './cell-members';
+import { LatitudeWindow } from './latitude-window';
 
 export interface RegionSettings {
   /** Great-circle radius of a region, km. */
@@ -31,6 +32,8 @@ export interface RegionalSeries {
   readonly regionFirst: Uint32Array;
   /** Grid cell at the centre of each kept region. */
   readonly centreCell: Uint32Array;
+  /** Occupied cells within the radius of each kept region's centre. */
+  readonly cellCount: Uint32Array;
   /** Mean subsampled richness of each kept region. */
   readonly richness: Float64Array;
 }
@@ -44,7 +47,8 @@ export interface RegionalSeries {
  * generator per slice) and the distinct taxa in their rows are counted; the region's richness is
  * the mean of those counts. The slice's `mean` and `sd` (divisor n − 1) are over its kept
  * regions: NaN without regions, sd NaN with one. Distances are compared as dot products of cell-
- * centre unit vectors against cos(radius / R). Single-threaded.
+ * centre unit vectors against cos(radius / R), among the cells whose latitude is within the
+ * radius of the centre's (a radius beyond half the circumference takes every cell). Single-threaded.
  */
 export function circularRegions(
   start: Uint32Array, abundances: SliceAbundances, cells: SliceCells, collections: SliceCollections,
@@ -52,7 +56,8 @@ export function circularRegions(
 ): RegionalSeries {
   const { cellFirst, cells: cellList } = cells;
   const sliceCount = cellFirst.length - 1;
-  const minCos = Math.cos(settings.radiusKm / EARTH_RADIUS_KM);
+  const angle = Math.min(Math.PI, settings.radiusKm / EARTH_RADIUS_KM);
+  const minCos = Math.cos(angle);
   const taxaOfCell = cellMembers(start, cells, abundances.entryOfRow);
   const collectionsOfCell = cellMembers(start, cells, collections.localOfRow, collections.collectionFirst);
   const xyz = new Float64Array(3 * cellList.length);
@@ -62,10 +67,12 @@ export function circularRegions(
     writeUnitVector(centre[0], centre[1], xyz, 3 * k);
   }
   const members = new Uint32Array(maxSpan(cellFirst));
+  const window = new LatitudeWindow(maxSpan(cellFirst));
   const seenTaxon = new Uint32Array(abundances.taxon.length);
   const seenCollection = new Uint32Array(collections.begin.length);
   const regionFirst = new Uint32Array(sliceCount + 1);
   const centreCell: number[] = [];
+  const cellCount: number[] = [];
   const richness: number[] = [];
   const out = { regions: new Float64Array(sliceCount), mean: new Float64Array(sliceCount), sd: new Float64Array(sliceCount) };
   let stamp = 0;
@@ -74,10 +81,13 @@ export function circularRegions(
     const random = sliceRandom(settings.seed, s);
     const from = cellFirst[s];
     const to = cellFirst[s + 1];
+    window.sort(xyz, from, to);
     for (let c = from; c < to; c++) {
       const cx = xyz[3 * c], cy = xyz[3 * c + 1], cz = xyz[3 * c + 2];
       let size = 0;
-      for (let k = from; k < to; k++) {
+      const last = window.end(cz, angle);
+      for (let i = window.begin(cz, angle); i < last; i++) {
+        const k = window.cell[i];
         if (cx * xyz[3 * k] + cy * xyz[3 * k + 1] + cz * xyz[3 * k + 2] >= minCos) members[size++] = k;
       }
       if (size < settings.minCells) continue;
@@ -96,6 +106,7 @@ export function circularRegions(
         sum += countDistinct(taxaOfCell, members, settings.minCells, seenTaxon, stamp);
       }
       centreCell.push(cellList[c]);
+      cellCount.push(size);
       richness.push(sum / settings.trials);
     }
     regionFirst[s + 1] = richness.length;
@@ -106,7 +117,7 @@ export function circularRegions(
     out.mean[s] = mean(richnessColumn, regionFirst[s], regionFirst[s + 1]);
     out.sd[s] = sampleSd(richnessColumn, regionFirst[s], regionFirst[s + 1]);
   }
-  return { ...out, regionFirst, centreCell: Uint32Array.from(centreCell), richness: richnessColumn };
+  return { ...out, regionFirst, centreCell: Uint32Array.from(centreCell), cellCount: Uint32Array.from(cellCount), richness: richnessColumn };
 }
 
 /** Distinct members (stamped in `seen`) over the lists of cells[0 … count − 1]. */

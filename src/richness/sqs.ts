@@ -60,10 +60,18 @@ export function shareholderQuorumSubsampling(
   };
   let mostTaxa = 0;
   let mostCollections = 0;
+  let mostRows = 0;
   for (let s = 0; s < sliceCount; s++) {
     mostTaxa = Math.max(mostTaxa, first[s + 1] - first[s]);
     mostCollections = Math.max(mostCollections, collectionFirst[s + 1] - collectionFirst[s]);
+    let rowCount = 0;
+    for (let c = collectionFirst[s]; c < collectionFirst[s + 1]; c++) rowCount += end[c] - begin[c];
+    mostRows = Math.max(mostRows, rowCount);
   }
+  // Per slice, the taxa of each collection (slice-local numbers, each once per collection) laid
+  // out contiguously, so a trial reads memory in order.
+  const memberStart = new Uint32Array(mostCollections + 1);
+  const member = new Uint32Array(mostRows);
   const seen = new Uint32Array(mostTaxa);
   const order = new Uint32Array(mostCollections);
   const richness = new Float64Array(settings.trials);
@@ -71,8 +79,9 @@ export function shareholderQuorumSubsampling(
   for (let s = 0; s < sliceCount; s++) {
     const u = coverage[s];
     const taxonBase = first[s];
+    const weight = occurrences.subarray(taxonBase, first[s + 1]);
     let total = 0;
-    for (let e = taxonBase; e < first[s + 1]; e++) total += occurrences[e];
+    for (let t = 0; t < weight.length; t++) total += weight[t];
     if (total === 0) {
       out.reason[s] = 1;
       continue;
@@ -84,15 +93,24 @@ export function shareholderQuorumSubsampling(
     const target = ((settings.quorum * total) / u) * (1 - QUORUM_SLACK);
     const collectionBase = collectionFirst[s];
     const collectionCount = collectionFirst[s + 1] - collectionBase;
-    for (let c = 0; c < collectionCount; c++) order[c] = collectionBase + c;
+    let members = 0;
+    for (let c = 0; c < collectionCount; c++) {
+      memberStart[c] = members;
+      stamp = nextStamp(seen, stamp);
+      for (let p = begin[collectionBase + c]; p < end[collectionBase + c]; p++) {
+        const local = entryOfRow[rows[p]] - taxonBase;
+        if (seen[local] !== stamp) {
+          seen[local] = stamp;
+          member[members++] = local;
+        }
+      }
+      order[c] = c;
+    }
+    memberStart[collectionCount] = members;
     const random = sliceRandom(settings.seed, s);
     let drawn = 0;
     for (let trial = 0; trial < settings.trials; trial++) {
-      if (stamp === 0xffffffff) {
-        seen.fill(0);
-        stamp = 0;
-      }
-      stamp++;
+      stamp = nextStamp(seen, stamp);
       let sum = 0;
       let taxa = 0;
       let k = 0;
@@ -103,12 +121,11 @@ export function shareholderQuorumSubsampling(
         const picked = order[j];
         order[j] = order[k];
         order[k++] = picked;
-        for (let p = begin[picked]; p < end[picked]; p++) {
-          const entry = entryOfRow[rows[p]];
-          const local = entry - taxonBase;
-          if (seen[local] !== stamp) {
-            seen[local] = stamp;
-            sum += occurrences[entry];
+        for (let p = memberStart[picked]; p < memberStart[picked + 1]; p++) {
+          const t = member[p];
+          if (seen[t] !== stamp) {
+            seen[t] = stamp;
+            sum += weight[t];
             taxa++;
           }
         }
@@ -123,4 +140,11 @@ export function shareholderQuorumSubsampling(
     out.draws[s] = drawn / settings.trials;
   }
   return out;
+}
+
+/** The next stamp for a `seen` array, clearing it when the 32-bit stamps run out. */
+function nextStamp(seen: Uint32Array, stamp: number): number {
+  if (stamp < 0xffffffff) return stamp + 1;
+  seen.fill(0);
+  return 1;
 }

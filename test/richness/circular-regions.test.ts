@@ -38,17 +38,23 @@ describe('circular-region standardisation', () => {
     // d3-geo geoDistance (great-circle angle) × R as the outside reference for membership.
     const cellCount = 25;
     fc.assert(fc.property(
-      fc.array(fc.double({ min: -30, max: 30, noNaN: true }), { minLength: cellCount, maxLength: cellCount }),
-      fc.array(fc.double({ min: -30, max: 30, noNaN: true }), { minLength: cellCount, maxLength: cellCount }),
+      fc.double({ min: -90, max: 90, noNaN: true }),
+      fc.double({ min: -180, max: 180, noNaN: true }),
+      // noBias: without it the offsets crowd onto ±20 and 0, and few pairs sit near the radius.
+      fc.noBias(fc.array(fc.tuple(fc.double({ min: -20, max: 20, noNaN: true }), fc.double({ min: -20, max: 20, noNaN: true })), { minLength: cellCount, maxLength: cellCount })),
       fc.integer({ min: 1, max: 8 }),
-      (lat, lon, minCells) => {
+      (centreLat, centreLon, offsets, minCells) => {
+        // Cells scattered within 20° of a centre anywhere, poles and antimeridian included.
+        const lat = offsets.map(([d]) => Math.max(-90, Math.min(90, centreLat + d)));
+        const lon = offsets.map(([, d]) => centreLon + d);
         const rows = lat.map((_, k) => [k, k, k] as const);
         const r = regionsOf([...rows], lat, lon, { radiusKm: 1500, minCells, minCollections: 0, trials: 1, seed: 0 });
-        const expected = lat.map((_, c) => lat.filter((__, k) => geoDistance([lon[c], lat[c]], [lon[k], lat[k]]) * EARTH_RADIUS_KM <= 1500).length)
-          .map((members, c) => (members >= minCells ? c : -1)).filter((c) => c >= 0);
+        const members = lat.map((_, c) => lat.filter((__, k) => geoDistance([lon[c], lat[c]], [lon[k], lat[k]]) * EARTH_RADIUS_KM <= 1500).length);
+        const kept = members.map((m, c) => (m >= minCells ? c : -1)).filter((c) => c >= 0);
         const borderline = lat.some((_, c) => lat.some((__, k) => Math.abs(geoDistance([lon[c], lat[c]], [lon[k], lat[k]]) * EARTH_RADIUS_KM - 1500) < 1e-6));
         fc.pre(!borderline);
-        expect(Array.from(r.centreCell)).toEqual(expected);
+        expect(Array.from(r.centreCell)).toEqual(kept);
+        expect(Array.from(r.cellCount)).toEqual(kept.map((c) => members[c]));
         // One taxon per cell: each region's subsample of minCells cells has minCells taxa.
         r.richness.forEach((v) => expect(v).toBe(minCells));
       },
