@@ -1,7 +1,7 @@
 import { createSeededRandom } from '../time/seeded-random';
 import { sliceOfAge } from '../time/slice-lookup';
 import type { TimeScale } from '../time/time-scale';
-import { sortedQuantile } from './quantile';
+import { sortedQuantile } from './sample-summaries';
 
 /** Rows whose ages are redrawn: any rows (not in slice order), with their age ranges. */
 export interface AgeRangeRows {

@@ -5,7 +5,7 @@ import type { SliceAbundances } from './slice-abundances';
 import type { SliceCells } from './slice-cells';
 import type { SliceCollections } from './slice-collections';
 import { sliceRandom, uniformBelow } from './slice-seed';
-import { mean, sampleSd } from './quantile';
+import { mean, sampleSd } from './sample-summaries';
 import { cellMembers, type CellMembers } from './cell-members';
 import { LatitudeWindow } from './latitude-window';
 

@@ -8,7 +8,7 @@ export { threeTimers, type ThreeTimers } from './three-timers';
 export { goodsU, occurrenceSingletons, referenceSingletons } from './goods-u';
 export { chao1, type Chao1 } from './chao1';
 export { rarefiedRichness } from './rarefaction';
-export { sortedQuantile, mean, sampleSd } from './quantile';
+export { sortedQuantile, mean, sampleSd } from './sample-summaries';
 export { sliceRandom, uniformBelow } from './slice-seed';
 export { shareholderQuorumSubsampling, SQS_REASONS, type SqsReasonCode, type SqsSeries, type SqsSettings } from './sqs';
 export { sharedCells, type SharedCells } from './shared-cells';

@@ -1,7 +1,7 @@
 import type { SliceAbundances } from './slice-abundances';
 import type { SliceCollections } from './slice-collections';
 import { sliceRandom, uniformBelow } from './slice-seed';
-import { mean, sortedQuantile } from './quantile';
+import { mean, sortedQuantile } from './sample-summaries';
 
 /** Why a slice has no SQS value (index 0: it has one). */
 export const SQS_REASONS = ['subsampled', 'no occurrences', 'coverage below the quorum'] as const;
@@ -43,7 +43,8 @@ const QUORUM_SLACK = 1e-12;
  * - a slice with u < quorum cannot reach the quorum and has NaN values (reason 2); an empty
  *   slice has reason 1.
  * Each slice has its own generator (sliceRandom), so its values depend only on its rows, the
- * seed and its index. Quantiles follow Hyndman & Fan's definition 7. Single-threaded.
+ * seed and its index. Quantiles follow Hyndman & Fan's definition 7; lo ≤ hi always, but the
+ * mean can fall outside [lo, hi] when fewer than 2.5 % of the trials lie far out. Single-threaded.
  */
 export function shareholderQuorumSubsampling(
   abundances: SliceAbundances, collections: SliceCollections, coverage: Float64Array, settings: SqsSettings,

@@ -1,3 +1,5 @@
+// Summaries of a sample of values held in part of a Float64Array: quantile, mean, standard deviation.
+
 /**
  * The p-quantile of ascending values sorted[from … to − 1] by linear interpolation between
  * order statistics, Hyndman & Fan's (1996, American Statistician 50, 361–365) definition 7:
