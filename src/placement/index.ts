@@ -1,6 +1,6 @@
 export { DEFAULT_PLACEMENT, ROTATE_AT, placeOccurrences } from './place-occurrences';
 export type { Placement, PlacementSettings, RotateAt } from './place-occurrences';
-export { PLACEMENT_STATUS, isPlaced } from './placement-status';
+export { PLACEMENT_STATUS } from './placement-status';
 export type { PlacementStatus } from './placement-status';
 export { describeExclusion } from './describe-exclusion';
 export { ADDED_PROPERTIES, plateFeaturesOf } from './plate-features';

@@ -25,8 +25,3 @@ export const PLACEMENT_STATUS = {
 } as const;
 
 export type PlacementStatus = (typeof PLACEMENT_STATUS)[keyof typeof PLACEMENT_STATUS];
-
-/** True for a row that has a palaeoposition. */
-export function isPlaced(status: number): boolean {
-  return status <= PLACEMENT_STATUS.clamped;
-}

@@ -108,15 +108,6 @@ export function multiplyQuaternionsInto(
   return out;
 }
 
-/** The inverse rotation (for a unit quaternion the conjugate is the inverse). */
-export function conjugateQuaternionInto(q: ArrayLike<number>, out: Quaternion): Quaternion {
-  out[0] = q[0];
-  out[1] = -q[1];
-  out[2] = -q[2];
-  out[3] = -q[3];
-  return out;
-}
-
 /** Rescales to unit length, removing the drift that long chains of products accumulate. */
 export function normalizeQuaternionInto(q: ArrayLike<number>, out: Quaternion): Quaternion {
   const n = Math.hypot(q[0], q[1], q[2], q[3]);

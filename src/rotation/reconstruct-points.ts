@@ -106,9 +106,3 @@ function resolveGroup(model: RotationModel, g: number, plate: number, age: numbe
   work.groupStatus[g] = model.tryUncachedRotationAt(plate, age, work.rotation);
   if (work.groupStatus[g] <= ROTATION_STATUS.clamped) rotationMatrixFromQuaternionInto(work.rotation, work.matrices, 9 * g);
 }
-
-/** `reconstructPointsInto` with new output columns. */
-export function reconstructPoints(model: RotationModel, points: PresentDayPoints, ages: Float64Array | number): ReconstructedPoints {
-  const n = points.lat.length;
-  return reconstructPointsInto(model, points, ages, { lat: new Float64Array(n), lon: new Float64Array(n), status: new Uint8Array(n) });
-}

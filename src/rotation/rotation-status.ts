@@ -20,18 +20,3 @@ export const ROTATION_STATUS = {
 } as const;
 
 export type RotationStatus = (typeof ROTATION_STATUS)[keyof typeof ROTATION_STATUS];
-
-const REASONS: Readonly<Record<RotationStatus, string>> = {
-  0: 'reconstructed',
-  1: 'older than the rotation model reaches for its plate; reconstructed at the oldest age it reaches',
-  2: 'no plate id, so it cannot be reconstructed',
-  3: 'plate id not in the rotation model',
-  4: 'older than the rotation model reaches for its plate',
-  5: 'no present-day position to reconstruct',
-  6: 'no age to reconstruct at',
-};
-
-/** A short reason for a status, for rejected-row reports. */
-export function describeRotationStatus(status: RotationStatus): string {
-  return REASONS[status];
-}

@@ -5,8 +5,7 @@
  *
  * Split in two so that what depends only on the end points — the arc: b on a's side, the
  * angle θ between them and sin θ — can be worked out once per pair (each tabulated interval of
- * a rotation model) and reused for every t; interpolating along it then costs two sines. The
- * one-call form goes through the same two steps, so both give bit-identical results.
+ * a rotation model) and reused for every t; interpolating along it then costs two sines.
  */
 import { normalizeQuaternionInto, type Quaternion } from './quaternion';
 
@@ -16,8 +15,6 @@ const SLERP_LINEAR_BELOW = 1e-9;
 
 /** Numbers per arc: b on a's side (w, x, y, z), θ, sin θ. */
 export const SLERP_ARC_SIZE = 6;
-
-const scratchArc = new Float64Array(SLERP_ARC_SIZE);
 
 /** Writes the arc from `a` to `b` into out[offset … offset + SLERP_ARC_SIZE − 1]. */
 export function slerpArcInto(a: ArrayLike<number>, b: ArrayLike<number>, out: Float64Array, offset = 0): Float64Array {
@@ -57,9 +54,4 @@ export function slerpAlongArcInto(a: ArrayLike<number>, arcs: Float64Array, offs
   out[2] = ka * ay + kb * by;
   out[3] = ka * az + kb * bz;
   return theta < SLERP_LINEAR_BELOW ? normalizeQuaternionInto(out, out) : out;
-}
-
-/** Slerp from `a` to `b` at `t` in one call (`out` may be `a` or `b`). */
-export function slerpQuaternionsInto(a: ArrayLike<number>, b: ArrayLike<number>, t: number, out: Quaternion): Quaternion {
-  return slerpAlongArcInto(a, slerpArcInto(a, b, scratchArc), 0, t, out);
 }

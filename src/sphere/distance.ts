@@ -1,10 +1,9 @@
 /**
- * Great-circle distance. The kernels use the arctangent form of the central angle (Vincenty
- * 1975, Survey Review 23(176), the sphere case of his inverse formula), which keeps full
- * relative precision for coincident, nearby and antipodal points alike — unlike the arccosine
- * of the dot product (poor for small angles) or the haversine (poor near antipodes).
+ * Great-circle distance as a central angle (radians). The kernels use the arctangent form
+ * (Vincenty 1975, Survey Review 23(176), the sphere case of his inverse formula), which keeps
+ * full relative precision for coincident, nearby and antipodal points alike — unlike the
+ * arccosine of the dot product (poor for small angles) or the haversine (poor near antipodes).
  */
-import { EARTH_RADIUS_KM, RADIANS } from './earth';
 
 /** Central angle in radians between two positions given in radians. */
 export function centralAngle(lat1: number, lon1: number, lat2: number, lon2: number): number {
@@ -30,19 +29,4 @@ export function unitVectorAngle(xyz: Float64Array, i: number, j: number): number
   const cy = az * bx - ax * bz;
   const cz = ax * by - ay * bx;
   return Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), ax * bx + ay * by + az * bz);
-}
-
-/** Great-circle distance in km between two positions given in degrees, on the mean Earth sphere. */
-export function greatCircleDistanceKm(lat1Deg: number, lon1Deg: number, lat2Deg: number, lon2Deg: number): number {
-  return EARTH_RADIUS_KM * centralAngle(lat1Deg * RADIANS, lon1Deg * RADIANS, lat2Deg * RADIANS, lon2Deg * RADIANS);
-}
-
-/** Great-circle distances in km between row i of the first and row i of the second positions (degrees), into `out`. */
-export function greatCircleDistancesKmInto(
-  lat1Deg: Float64Array, lon1Deg: Float64Array, lat2Deg: Float64Array, lon2Deg: Float64Array, out: Float64Array,
-): Float64Array {
-  for (let i = 0, n = out.length; i < n; i++) {
-    out[i] = greatCircleDistanceKm(lat1Deg[i], lon1Deg[i], lat2Deg[i], lon2Deg[i]);
-  }
-  return out;
 }

@@ -1,8 +1,8 @@
 export { EARTH_RADIUS_KM, DEGREES, RADIANS } from './earth';
 export {
-  degreesToUnitVectors, degreesToUnitVectorsInto, writeUnitVector, unitVectorsToDegrees, unitVectorsToDegreesInto,
+  degreesToUnitVectors, degreesToUnitVectorsInto, writeUnitVector, unitVectorsToDegreesInto,
 } from './unit-vectors';
-export { centralAngle, unitVectorAngle, greatCircleDistanceKm, greatCircleDistancesKmInto } from './distance';
+export { centralAngle, unitVectorAngle } from './distance';
 export { canonicalLatitude, canonicalLongitude, samePosition } from './position-identity';
 export { convexHull, HULL_NONE_REASONS, GREAT_CIRCLE_TOLERANCE, type ConvexHull, type HullNoneReason } from './convex-hull';
 export { smallestEnclosingCap, OPEN_HEMISPHERE_MARGIN } from './smallest-enclosing-cap';

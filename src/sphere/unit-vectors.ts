@@ -33,19 +33,11 @@ export function writeUnitVector(latDeg: number, lonDeg: number, out: Float64Arra
   out[offset + 2] = sinQuadrant(qLat, sLat, cLat) + 0;
 }
 
-/** Latitudes and longitudes (degrees) of interleaved unit vectors; the inverse of `degreesToUnitVectors`. */
-export function unitVectorsToDegrees(xyz: Float64Array): { lat: Float64Array; lon: Float64Array } {
-  const n = xyz.length / 3;
-  const lat = new Float64Array(n);
-  const lon = new Float64Array(n);
-  unitVectorsToDegreesInto(xyz, lat, lon);
-  return { lat, lon };
-}
-
 /**
- * Writes latitudes in [−90, 90] and longitudes in [−180, 180] (degrees) of the vectors into
- * `outLat`, `outLon`. atan2 on both angles keeps full precision near the poles, where an
- * arcsine of z would not. The vectors need not be exactly unit length.
+ * The inverse of `degreesToUnitVectorsInto`: writes latitudes in [−90, 90] and longitudes in
+ * [−180, 180] (degrees) of the vectors into `outLat`, `outLon`. atan2 on both angles keeps full
+ * precision near the poles, where an arcsine of z would not. The vectors need not be exactly
+ * unit length.
  */
 export function unitVectorsToDegreesInto(xyz: Float64Array, outLat: Float64Array, outLon: Float64Array): void {
   for (let i = 0, n = outLat.length; i < n; i++) {

@@ -1,7 +1,7 @@
 import { geoDistance, geoInterpolate } from 'd3-geo';
 import { describe, expect, it } from 'vitest';
 import { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongitude } from '../../src/sphere/great-circle-path';
-import { degreesToUnitVectors, unitVectorsToDegrees } from '../../src/sphere/unit-vectors';
+import { degreesToUnitVectors, unitVectorsToDegreesInto } from '../../src/sphere/unit-vectors';
 
 const RAD = Math.PI / 180;
 
@@ -19,7 +19,8 @@ describe('appendArcInterior', () => {
     expect(theta).toBeCloseTo(geoDistance([100, -35], [-170, 62]), 14);
     const steps = Math.ceil(theta / (3 * RAD));
     expect(out.length).toBe(3 * (steps - 1));
-    const { lat, lon } = unitVectorsToDegrees(Float64Array.from(out));
+    const lat = new Float64Array(out.length / 3), lon = new Float64Array(out.length / 3);
+    unitVectorsToDegreesInto(Float64Array.from(out), lat, lon);
     const along = geoInterpolate([100, -35], [-170, 62]);
     for (let k = 0; k < lat.length; k++) expect(gap([lon[k], lat[k]], along((k + 1) / steps))).toBeLessThan(1e-9);
   });

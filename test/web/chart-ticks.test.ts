@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { ticks as d3Ticks } from 'd3-array';
-import { niceAxis, niceMax, niceTicks, niceTickStep } from '../../web/charts/ticks';
+import { niceAxis, niceTicks, niceTickStep } from '../../web/charts/ticks';
 
 describe('niceTicks', () => {
   // Hand-worked: the raw step (stop − start) / count has leading digit m; m ≥ √50 → 10,
@@ -65,23 +65,23 @@ describe('niceTickStep', () => {
   });
 });
 
-describe('niceMax', () => {
+describe('niceAxis', () => {
   it('rounds a maximum up to the next nice tick: 12345 → 15000, 5 → 6, 0.93 → 1, 0.75 → 0.8', () => {
     // 12345 / 3 → step 5000; 5 / 3 = 1.67 → step 2; 0.93 / 2 = 0.465 → step 0.5; 0.75 / 4 = 0.1875 → step 0.2.
-    expect(niceMax(12345, 3)).toBe(15000);
-    expect(niceMax(5, 3)).toBe(6);
-    expect(niceMax(0.93, 2)).toBe(1);
-    expect(niceMax(0.75, 4)).toBe(0.8);
+    expect(niceAxis(12345, 3).top).toBe(15000);
+    expect(niceAxis(5, 3).top).toBe(6);
+    expect(niceAxis(0.93, 2).top).toBe(1);
+    expect(niceAxis(0.75, 4).top).toBe(0.8);
   });
 
   it('keeps a maximum that already is a tick', () => {
-    expect(niceMax(6000, 3)).toBe(6000);
-    expect(niceMax(1, 4)).toBe(1);
+    expect(niceAxis(6000, 3).top).toBe(6000);
+    expect(niceAxis(1, 4).top).toBe(1);
   });
 
   it('gives 1 when there is nothing to show', () => {
-    expect(niceMax(0, 3)).toBe(1);
-    expect(niceMax(NaN, 3)).toBe(1);
+    expect(niceAxis(0, 3).top).toBe(1);
+    expect(niceAxis(NaN, 3).top).toBe(1);
   });
 
   it('ends the axis on a labelled tick: 800000.0000000001 over 6 ticks gives 0 … 900000 by 100000', () => {

@@ -7,10 +7,11 @@ import type { Polygon } from 'geojson';
 import { describe, expect, it } from 'vitest';
 import { HealpixGrid } from '../../src/grid';
 import { CellLookup } from '../../web/equal-area/cell-lookup';
-import { fitFrame, frameForwardInto } from '../../web/equal-area/map-frame';
+import { fitFrame } from '../../web/equal-area/map-frame';
 import { entryAtMapPoint, mapPointToLonLatInto } from '../../web/equal-area/map-hit';
 import { EQUAL_AREA_PROJECTIONS, referenceProjection } from '../../web/equal-area/map-projection';
 import { d3Polygon } from '../grid/d3-rings';
+import { framePoint } from './frame-point';
 import { smallView } from './small-analysis-view';
 
 const view = smallView();
@@ -28,7 +29,7 @@ function mapPoint(kind: (typeof EQUAL_AREA_PROJECTIONS)[number], lon: number, la
   const reference = referenceProjection(kind);
   const frame = fitFrame(reference, 6, 6, 894, 494);
   const [xr, yr] = reference.projection([lon, lat])!;
-  const [x, y] = frameForwardInto(frame, xr, yr, new Float64Array(2));
+  const [x, y] = framePoint(frame, xr, yr);
   return { x, y, frame };
 }
 

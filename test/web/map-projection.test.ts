@@ -8,9 +8,10 @@
 import { geoPath } from 'd3-geo';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fitFrame, frameForwardInto, frameInverseInto } from '../../web/equal-area/map-frame';
+import { fitFrame, frameInverseInto } from '../../web/equal-area/map-frame';
 import { EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, PROJECTION_CAPTIONS, fittedProjection, isOnMap, referenceProjection } from '../../web/equal-area/map-projection';
 import { HealpixGrid } from '../../src/grid';
+import { framePoint } from './frame-point';
 import { boxRing } from './small-analysis-view';
 
 const RADIANS = Math.PI / 180;
@@ -101,7 +102,7 @@ describe('fitFrame', () => {
         const reference = referenceProjection(kind);
         const frame = fitFrame(reference, 6, 6, width - 6, height - 6);
         const [xr, yr] = reference.projection([lon, lat])!;
-        const placed = frameForwardInto(frame, xr, yr, new Float64Array(2));
+        const placed = framePoint(frame, xr, yr);
         const [x, y] = fittedProjection(kind, 6, 6, width - 6, height - 6)([lon, lat])!;
         // d3 fits on its resampled outline at scale 150, we on the one at REFERENCE_SIZE: both
         // are the exact outline within d3's resampling precision, far below a hundredth of a pixel here.

@@ -1,4 +1,4 @@
-export { niceAxis, niceMax, niceTicks, niceTickStep, type NiceAxis } from './ticks';
+export { niceAxis, niceTicks, niceTickStep, type NiceAxis } from './ticks';
 export { linearScale, type LinearScale } from './linear-scale';
 export { formatLatitude, formatNumber, formatPercent, tickFormat } from './number-format';
 export { linePath, markerPath } from './line-path';

@@ -81,8 +81,3 @@ export function niceAxis(max: number, count: number): NiceAxis {
   for (let k = 0; k <= last; k++) ticks.push(valueOf(k, step));
   return { top: valueOf(last, step), step: step.divisor === 1 ? step.multiple : 1 / step.divisor, ticks };
 }
-
-/** Top of niceAxis(max, count). */
-export function niceMax(max: number, count: number): number {
-  return niceAxis(max, count).top;
-}

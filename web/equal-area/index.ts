@@ -6,7 +6,7 @@ export { drawMap, type Canvas2D, type MapPicture } from './draw-map';
 export { escapeXml } from './escape-xml';
 export { figurePng } from './figure-png';
 export { FIGURE_PAD, figureLayout, keyOffsets, type FigureLayout } from './figure-layout';
-export { fitFrame, frameForwardInto, frameInverseInto, type MapFrame } from './map-frame';
+export { fitFrame, frameInverseInto, type MapFrame } from './map-frame';
 export { indicatorColour, legendStops, mapLegend, type LegendKey, type LegendStop, type MapLegend } from './map-legend';
 export {
   EQUAL_AREA_PROJECTIONS, POLAR_CLIP_DEG, PROJECTION_CAPTIONS, PROJECTION_NAMES, REFERENCE_SIZE, SPHERE,

@@ -20,13 +20,6 @@ export function fitFrame(reference: ReferenceProjection, x0: number, y0: number,
   return { k, tx, ty };
 }
 
-/** Box position of a reference point, written into out as [x, y]. */
-export function frameForwardInto(frame: MapFrame, xRef: number, yRef: number, out: Float64Array): Float64Array {
-  out[0] = frame.k * xRef + frame.tx;
-  out[1] = frame.k * yRef + frame.ty;
-  return out;
-}
-
 /** Reference position of a box point, written into out as [xRef, yRef]. */
 export function frameInverseInto(frame: MapFrame, x: number, y: number, out: Float64Array): Float64Array {
   out[0] = (x - frame.tx) / frame.k;
