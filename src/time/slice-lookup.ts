@@ -6,7 +6,7 @@
 
 // The searches keep `first` (entries before it pass the test) and `len` (entries still unknown)
 // and update both with selects rather than branches: on scattered ages a branchy search
-// mispredicts at almost every step, and this form measured about a quarter faster.
+// mispredicts at almost every step.
 
 /** Number of leading slices whose boundary is >= x (bounds decreasing). */
 function countAtLeast(bounds: Float64Array, x: number): number {

@@ -29,8 +29,8 @@ export const MAP_STYLE = {
 /**
  * Width of the spanning tree, CSS px. A tree of tens of thousands of edges is a dense web
  * where thin lines read better, and strokes up to one device pixel wide are drawn by canvas
- * engines as hairlines: tens of times faster than wider ones in Chromium's software rasteriser,
- * which is what a browser without a GPU (this view's audience) uses.
+ * engines as hairlines, far cheaper than wider ones in Chromium's software rasteriser, which is
+ * what a browser without a GPU (this view's audience) uses.
  */
 export function treeWidth(edges: number, pixelRatio: number): number {
   return edges > MAP_STYLE.thinTreeEdges ? 1 / pixelRatio : MAP_STYLE.treeWidth;
