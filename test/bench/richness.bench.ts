@@ -6,7 +6,7 @@
 import { report, time } from './measure';
 import { HealpixGrid } from '../../src/grid';
 import { createSeededRandom, type SeededRandom } from '../../src/time';
-import { greatCircleDistanceKm } from '../../src/sphere';
+import { greatCircleDistanceKm } from '../sphere/distance-km';
 import {
   circularRegions, DEFAULT_REGION_SETTINGS, goodsU, occurrenceSingletons, shareholderQuorumSubsampling,
   sliceAbundances, sliceCells, sliceCollections, type RichnessInput,

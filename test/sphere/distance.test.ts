@@ -4,6 +4,7 @@ import geodesic from 'geographiclib-geodesic';
 import { centralAngle, unitVectorAngle } from '../../src/sphere/distance';
 import { degreesToUnitVectors } from '../../src/sphere/unit-vectors';
 import { EARTH_RADIUS_KM, RADIANS } from '../../src/sphere/earth';
+import { greatCircleDistanceKm } from './distance-km';
 
 // Reference: GeographicLib (Karney 2013, J. Geodesy 87) solving the inverse geodesic problem on a
 // sphere of the same radius (flattening 0), where geodesics are great circles. s12 is in metres.
@@ -15,11 +16,6 @@ const referenceKm = (lat1: number, lon1: number, lat2: number, lon2: number) =>
 // a few rounding errors of the central angle, ~1e-16 × 20,000 km.
 function closeTo(actual: number, expected: number): void {
   expect(Math.abs(actual - expected)).toBeLessThanOrEqual(Math.max(1e-9, 1e-13 * expected));
-}
-
-/** The central angle between positions in degrees as a distance in km on the mean Earth sphere. */
-function greatCircleDistanceKm(lat1: number, lon1: number, lat2: number, lon2: number): number {
-  return EARTH_RADIUS_KM * centralAngle(lat1 * RADIANS, lon1 * RADIANS, lat2 * RADIANS, lon2 * RADIANS);
 }
 
 const lat = fc.double({ min: -90, max: 90, noNaN: true });
