@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { stat } from 'node:fs/promises';
-import { exportFiles, runAnalysis } from '../run';
+import { runAnalysis } from '../run';
 import { findChartInterval } from '../time';
 import { parseCoverageOptions } from './coverage-options';
 import { resolveSession, sessionInput } from './coverage-session';
@@ -9,7 +9,7 @@ import { progressReporter } from './progress';
 import { readRotationFile } from './read-rotation-file';
 import { fileText, readBinsFile, readTableFile } from './read-table-file';
 import { printSummary } from './summary';
-import { writeResults } from './write-results';
+import { writeExports } from './write-results';
 
 /** `driftgrid coverage`: table → slices → positions → cells → measures → files. */
 export async function runCoverage(args: readonly string[]): Promise<number> {
@@ -44,8 +44,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
     ...(binsFile === undefined ? {} : { bins: sessionInput(binsFile, await fileDigest(binsFile), outFolder) }),
     ...(rotationFile === undefined ? {} : { rotation: sessionInput(rotationFile, await fileDigest(rotationFile), outFolder) }),
   };
-  const files = await exportFiles({ run, read, inputs, tableText: fileText(input) });
-  const written = await writeResults(outFolder, files, [input, ...(binsFile === undefined ? [] : [binsFile]), ...(rotationFile === undefined ? [] : [rotationFile])]);
+  const written = await writeExports(outFolder, { run, read, inputs, tableText: fileText(input) }, [input, ...(binsFile === undefined ? [] : [binsFile]), ...(rotationFile === undefined ? [] : [rotationFile])]);
   if (!options.quiet) {
     printSummary({
       rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model, loneOldest: run.loneOldest, written,

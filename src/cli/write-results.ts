@@ -1,5 +1,9 @@
+import { createWriteStream } from 'node:fs';
 import { mkdir, realpath, writeFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
+import { Readable } from 'node:stream';
+import { pipeline } from 'node:stream/promises';
+import { EXPORT_FILES, exportFileChunks, type ExportSource } from '../run';
 
 /**
  * Creates `folder` when missing and returns the paths of `names` in it. Refuses when any of them
@@ -22,4 +26,20 @@ export async function writeResults(folder: string, files: Readonly<Record<string
   const targets = await prepareTargets(folder, Object.keys(files), inputs);
   await Promise.all(Object.values(files).map((text, k) => writeFile(targets[k], text)));
   return targets;
+}
+
+/**
+ * Writes a run's export files into `folder` (created when missing), never over any of the inputs,
+ * each streamed to disk chunk by chunk as it is made, so that memory stays bounded however large
+ * the cell files grow.
+ */
+export async function writeExports(folder: string, source: ExportSource, inputs: readonly string[]): Promise<string[]> {
+  const targets = await prepareTargets(folder, EXPORT_FILES, inputs);
+  for (const [k, name] of EXPORT_FILES.entries()) await writeChunks(targets[k], exportFileChunks(source, name));
+  return targets;
+}
+
+/** Writes `chunks` to `target` in order, waiting for the disk when it falls behind. */
+export function writeChunks(target: string, chunks: AsyncIterable<Uint8Array>): Promise<void> {
+  return pipeline(Readable.from(chunks, { objectMode: false }), createWriteStream(target));
 }

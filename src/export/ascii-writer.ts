@@ -1,17 +1,23 @@
 /**
- * Builds a large ASCII text (numbers, JSON punctuation, grid names) directly as bytes. Writing a
- * 60 MB GeoJSON file as millions of small strings spent most of its time in the garbage collector;
- * bytes copied into one growing buffer do not.
+ * Builds a large ASCII text (numbers, JSON punctuation, grid names) directly as bytes, handed out
+ * in chunks of about `chunkBytes` so that a file of any size is written in bounded memory. Writing
+ * a 60 MB GeoJSON file as millions of small strings spent most of its time in the garbage
+ * collector; bytes copied into a buffer do not.
  */
 const SHORT_PIECE = 48;
 const MAX_DIGITS = 16;
+/** Room past a full chunk for the pieces that complete it, so that a chunk's buffer seldom grows. */
+const SLACK_BYTES = 1 << 14;
+
+/** Bytes per chunk the exports hand out: large enough that per-chunk costs vanish, small beside any file. */
+export const CHUNK_BYTES = 1 << 20;
 
 export class AsciiWriter {
   private buffer: Uint8Array;
   private length = 0;
 
-  constructor(initialBytes = 1 << 16) {
-    this.buffer = new Uint8Array(Math.max(64, initialBytes));
+  constructor(private readonly chunkBytes = CHUNK_BYTES) {
+    this.buffer = new Uint8Array(Math.max(64, chunkBytes + SLACK_BYTES));
   }
 
   /** Encodes ASCII text once, for pieces that are written many times. */
@@ -23,6 +29,11 @@ export class AsciiWriter {
       bytes[i] = code;
     }
     return bytes;
+  }
+
+  /** True once a chunk's worth is written: time to `take` it. */
+  get full(): boolean {
+    return this.length >= this.chunkBytes;
   }
 
   bytes(piece: Uint8Array): this {
@@ -53,9 +64,12 @@ export class AsciiWriter {
     return this;
   }
 
-  /** The bytes written so far (a view, valid until the next write). */
-  result(): Uint8Array {
-    return this.buffer.subarray(0, this.length);
+  /** The bytes written since the last `take`, now the caller's; writing goes on into a new buffer. */
+  take(): Uint8Array {
+    const chunk = this.buffer.subarray(0, this.length);
+    this.buffer = new Uint8Array(this.buffer.length);
+    this.length = 0;
+    return chunk;
   }
 
   private reserve(extra: number): void {

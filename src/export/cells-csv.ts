@@ -7,11 +7,11 @@ export const CELLS_COLUMNS = ['slice', 'grid', 'cell', 'cell_lat', 'cell_lon', '
 
 /**
  * `cells.csv`: one row per occupied (slice, cell), by slice (from 1, oldest) then cell number.
- * Written as ASCII bytes; the grid, cell and centre fields are formatted once per cell, however
- * many slices occupy it.
+ * Written as ASCII bytes, in chunks of about CHUNK_BYTES (the consumer's to keep); the grid, cell
+ * and centre fields are formatted once per cell, however many slices occupy it.
  */
-export function cellsCsv(cells: CellTallies, grid: EqualAreaGrid): Uint8Array {
-  const out = new AsciiWriter(cells.count * 64);
+export function* cellsCsv(cells: CellTallies, grid: EqualAreaGrid): Generator<Uint8Array, void, undefined> {
+  const out = new AsciiWriter();
   out.bytes(AsciiWriter.encode(csvLine(CELLS_COLUMNS)));
   const cellFields = new Map<number, Uint8Array>();
   const centre = new Float64Array(2);
@@ -28,6 +28,7 @@ export function cellsCsv(cells: CellTallies, grid: EqualAreaGrid): Uint8Array {
     }
     out.unsigned(cells.slice[k] + 1).bytes(fields);
     out.unsigned(cells.occurrences[k]).bytes(comma).unsigned(cells.collections[k]).bytes(comma).unsigned(cells.taxa[k]).bytes(newline);
+    if (out.full) yield out.take();
   }
-  return out.result();
+  yield out.take();
 }

@@ -12,10 +12,10 @@ const piece = AsciiWriter.encode;
 /**
  * `cells.geojson`: an RFC 7946 FeatureCollection with one Polygon (or MultiPolygon where the cell
  * crosses the antimeridian) per occupied (slice, cell), carrying the cells.csv columns as
- * properties. Written as ASCII bytes; each cell's fields and geometry are formatted once, however
- * many slices occupy it.
+ * properties. Written as ASCII bytes, in chunks of about CHUNK_BYTES (the consumer's to keep);
+ * each cell's fields and geometry are formatted once, however many slices occupy it.
  */
-export function cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Uint8Array {
+export function* cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Generator<Uint8Array, void, undefined> {
   const perCell = new Map<number, { head: Uint8Array; tail: Uint8Array }>();
   const centre = new Float64Array(2);
   const gridName = JSON.stringify(grid.name);
@@ -24,7 +24,7 @@ export function cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Uint8Arra
   const collections = piece(',"collections":');
   const taxa = piece(',"taxa":');
   const separator = piece(',\n');
-  const out = new AsciiWriter(cells.count * 512);
+  const out = new AsciiWriter();
   out.bytes(piece('{"type":"FeatureCollection","features":[\n'));
   for (let k = 0; k < cells.count; k++) {
     const cell = cells.cell[k];
@@ -43,8 +43,9 @@ export function cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Uint8Arra
     out.bytes(collections).unsigned(cells.collections[k]);
     out.bytes(taxa).unsigned(cells.taxa[k]);
     out.bytes(shared.tail);
+    if (out.full) yield out.take();
   }
-  return out.bytes(piece('\n]}\n')).result();
+  yield out.bytes(piece('\n]}\n')).take();
 }
 
 function cellGeometry(grid: EqualAreaGrid, cell: number): string {

@@ -23,34 +23,55 @@ export interface ExportSource {
   readonly tableText: TextSource;
 }
 
-/** The export files named (all by default), name → contents; the command line writes them, the page downloads one. */
-export async function exportFiles<N extends ExportFile>(
-  source: ExportSource, names: readonly N[] = EXPORT_FILES as readonly ExportFile[] as readonly N[],
-): Promise<Record<N, string | Uint8Array>> {
-  const files: Partial<Record<ExportFile, string | Uint8Array>> = {};
-  for (const name of names) files[name] = await exportFile(source, name);
-  return files as Record<N, string | Uint8Array>;
-}
-
-async function exportFile(source: ExportSource, name: ExportFile): Promise<string | Uint8Array> {
+/**
+ * The bytes of one export file, in order, as chunks the consumer keeps: the one description of
+ * each file, which the command line streams to disk and the page collects for a download. The
+ * cell files come in chunks of about a megabyte, so that no file is ever whole in memory.
+ */
+export async function* exportFileChunks(source: ExportSource, name: ExportFile): AsyncGenerator<Uint8Array, void, undefined> {
   const { run, read } = source;
   const { result, grid } = run;
   switch (name) {
     case 'slices.csv':
-      return slicesCsv(result.slices);
+      yield encoder.encode(slicesCsv(result.slices));
+      return;
     case 'cells.csv':
-      return cellsCsv(result.cells, grid);
+      yield* cellsCsv(result.cells, grid);
+      return;
     case 'cells.geojson':
-      return cellsGeoJson(result.cells, grid);
+      yield* cellsGeoJson(result.cells, grid);
+      return;
     case 'rejects.csv': {
       const { exclusions, placement } = result;
       const originals = await readRawRecords(source.tableText, excludedLines(read.table, exclusions));
       const excluded = excludedRows(read.table, exclusions, placement, run.model, run.settings.rotateAt, originals);
-      return rejectsCsv([...read.rejects, ...excluded]);
+      yield encoder.encode(rejectsCsv([...read.rejects, ...excluded]));
+      return;
     }
     case 'session.json': {
       const counts = { rowsRead: read.rowsRead, accepted: read.table.count, rejectedOnReading: read.rejects.length };
-      return sessionJson(buildSession(source.inputs, run.settings, counts, result));
+      yield encoder.encode(sessionJson(buildSession(source.inputs, run.settings, counts, result)));
+      return;
     }
   }
 }
+
+/** One export file's bytes whole, for a download (the page holds the file once anyway). */
+export async function exportFileBytes(source: ExportSource, name: ExportFile): Promise<Uint8Array> {
+  const chunks: Uint8Array[] = [];
+  let length = 0;
+  for await (const chunk of exportFileChunks(source, name)) {
+    chunks.push(chunk);
+    length += chunk.length;
+  }
+  if (chunks.length === 1) return chunks[0];
+  const bytes = new Uint8Array(length);
+  let at = 0;
+  for (const chunk of chunks) {
+    bytes.set(chunk, at);
+    at += chunk.length;
+  }
+  return bytes;
+}
+
+const encoder = new TextEncoder();

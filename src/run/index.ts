@@ -15,7 +15,7 @@ export { buildSession } from './build-session';
 export type { Run, RunInputs } from './run-analysis';
 export { runAnalysis } from './run-analysis';
 export type { ExportFile, ExportSource } from './export-files';
-export { EXPORT_FILES, exportFiles } from './export-files';
+export { EXPORT_FILES, exportFileBytes, exportFileChunks } from './export-files';
 export type { TextSource } from './text-source';
 export type { TextRecords } from './read-records';
 export { isBlankRecord, readRawRecords, readRecords, scanRecords } from './read-records';

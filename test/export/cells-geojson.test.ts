@@ -18,7 +18,7 @@ const polygonsOf = (f: Feature<Polygon | MultiPolygon>): Position[][][] =>
 
 describe.each(['healpix:4', 'bands:15'])('cells.geojson for every cell of %s', (name) => {
   const grid = parseGridName(name);
-  const text = new TextDecoder().decode(cellsGeoJson(everyCell(grid.cellCount), grid));
+  const text = Buffer.concat([...cellsGeoJson(everyCell(grid.cellCount), grid)]).toString('utf8');
   const collection = JSON.parse(text) as FeatureCollection<Polygon | MultiPolygon>;
 
   it('is a FeatureCollection with one feature per cell and the cells.csv properties', () => {

@@ -2,7 +2,7 @@
 // write from it. Counts are worked by hand from the four-row table below.
 import { describe, expect, it } from 'vitest';
 import { SESSION_FORMAT, SESSION_FORMAT_VERSION } from '../../src/export/session';
-import { DEFAULT_RUN_SETTINGS, EXPORT_FILES, buildSession, exportFiles, parseRunSettings, runAnalysis, type TextSource } from '../../src/run';
+import { DEFAULT_RUN_SETTINGS, EXPORT_FILES, buildSession, exportFileBytes, exportFileChunks, parseRunSettings, type ExportSource, runAnalysis, type TextSource } from '../../src/run';
 import { createOccurrenceReader } from '../../src/table';
 import { equalBins, findChartInterval } from '../../src/time';
 import { TOOL_VERSION } from '../../src/version';
@@ -47,30 +47,52 @@ describe('a run', () => {
   it('writes every export file, the rejects with their original text read again from the source', async () => {
     const read = readTable();
     const run = runAnalysis(read.table, DEFAULT_RUN_SETTINGS, {});
-    const files = await exportFiles({ run, read, inputs: INPUTS, tableText: text });
+    const files = await allFiles({ run, read, inputs: INPUTS, tableText: text });
     expect(Object.keys(files)).toEqual([...EXPORT_FILES]);
-    const rejects = String(files['rejects.csv']).split('\n');
+    const rejects = files['rejects.csv'].split('\n');
     expect(rejects[0]).toBe('line,field,reason,original');
     expect(rejects[1]).toMatch(/^3,/);
-    expect(String(files['rejects.csv'])).toContain('"""Beta\r\nprime"",11,21,900,899"');
+    expect(files['rejects.csv']).toContain('"""Beta\r\nprime"",11,21,900,899"');
     expect(rejects.some((line) => line.startsWith('5,taxon,'))).toBe(true);
-    const slices = String(files['slices.csv']).trim().split('\n');
+    const slices = files['slices.csv'].trim().split('\n');
     expect(slices).toHaveLength(1 + run.scale.names.length);
-    expect(JSON.parse(String(files['session.json'])).summary.slices).toBe(run.scale.names.length);
+    expect(JSON.parse(files['session.json']).summary.slices).toBe(run.scale.names.length);
   });
 
-  it('writes only the files asked for, the same bytes as in the full set', async () => {
+  it('writes one file alone as the same bytes as in the full set, reading the table again only for the rejects', async () => {
     const read = readTable();
     const run = runAnalysis(read.table, DEFAULT_RUN_SETTINGS, {});
-    const all = await exportFiles({ run, read, inputs: INPUTS, tableText: text });
+    const all = await allFiles({ run, read, inputs: INPUTS, tableText: text });
     let reread = 0;
     const counted: TextSource = async (push) => {
       reread++;
       push(TABLE);
     };
-    const one = await exportFiles({ run, read, inputs: INPUTS, tableText: counted }, ['cells.csv']);
-    expect(Object.keys(one)).toEqual(['cells.csv']);
-    expect(one['cells.csv']).toEqual(all['cells.csv']);
+    const one = await exportFileBytes({ run, read, inputs: INPUTS, tableText: counted }, 'cells.csv');
+    expect(new TextDecoder().decode(one)).toBe(all['cells.csv']);
     expect(reread).toBe(0);
   });
+
+  it('hands out the cell files in chunks the consumer keeps: gathered later, they are the whole file', async () => {
+    // Nearly every cell of healpix:16 occupied in two slices: megabytes of GeoJSON, several chunks.
+    const rows = ['taxon,palaeo_lat,palaeo_lon,max_ma,min_ma'];
+    for (let lat = -89; lat < 90; lat += 2) for (let lon = -179; lon < 180; lon += 2) rows.push(`T,${lat},${lon},70,68`, `T,${lat},${lon},100,95`);
+    const reader = createOccurrenceReader({ resolveInterval: findChartInterval });
+    reader.push(`${rows.join('\n')}\n`);
+    const read = reader.end();
+    const source: ExportSource = { run: runAnalysis(read.table, { ...DEFAULT_RUN_SETTINGS, grid: { kind: 'healpix', nside: 16 } }, {}), read, inputs: INPUTS, tableText: text };
+    const chunks: Uint8Array[] = [];
+    for await (const chunk of exportFileChunks(source, 'cells.geojson')) chunks.push(chunk);
+    expect(chunks.length).toBeGreaterThan(2);
+    const geojson = JSON.parse(Buffer.concat(chunks).toString('utf8')) as { features: Array<{ properties: { cell: number; slice: number } }> };
+    const csv = new TextDecoder().decode(await exportFileBytes(source, 'cells.csv')).trim().split('\n').slice(1);
+    expect(geojson.features.map((f) => `${f.properties.slice},${f.properties.cell}`)).toEqual(csv.map((line) => line.split(',').filter((_, i) => i === 0 || i === 2).join(',')));
+  });
 });
+
+/** Every export file of `source`, decoded, by name. */
+async function allFiles(source: ExportSource): Promise<Record<string, string>> {
+  const files: Record<string, string> = {};
+  for (const name of EXPORT_FILES) files[name] = new TextDecoder().decode(await exportFileBytes(source, name));
+  return files;
+}

@@ -6,7 +6,7 @@ import { analyse } from '../../src/analysis';
 import type { SessionInput } from '../../src/export/session';
 import type { PlateFeature } from '../../src/placement';
 import { createRotationModel } from '../../src/rotation';
-import { exportFiles, parseRunSettings, runAnalysis, settingsText, type Run, type RunSettings, type SessionInputs } from '../../src/run';
+import { exportFileBytes, parseRunSettings, runAnalysis, settingsText, type Run, type RunSettings, type SessionInputs } from '../../src/run';
 import type { AnalysisView, ExportFile, ExtraRole } from '../protocol';
 import { buildView, type IndicatorAnalysis } from './build-view';
 import type { LoadedExtra, LoadedTable } from './read-inputs';
@@ -16,8 +16,6 @@ import { blobText } from './stream-source';
 const MEDIA_TYPES: Readonly<Record<ExportFile, string>> = {
   'slices.csv': 'text/csv', 'cells.csv': 'text/csv', 'cells.geojson': 'application/geo+json', 'rejects.csv': 'text/csv', 'session.json': 'application/json',
 };
-
-const encoder = new TextEncoder();
 
 export class Workbench {
   private table: LoadedTable | undefined;
@@ -72,9 +70,8 @@ export class Workbench {
   async exportFile(file: ExportFile): Promise<{ bytes: Uint8Array; mime: string }> {
     const run = this.requireCurrent();
     const table = this.requireTable();
-    const files = await exportFiles({ run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob) }, [file]);
-    const contents = files[file];
-    return { bytes: typeof contents === 'string' ? encoder.encode(contents) : contents, mime: MEDIA_TYPES[file] };
+    const bytes = await exportFileBytes({ run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob) }, file);
+    return { bytes, mime: MEDIA_TYPES[file] };
   }
 
   /** The loaded files as a session records them: by name, since the page knows no paths. */
