@@ -19,11 +19,11 @@ export function* cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Generato
   const perCell = new Map<number, { head: Uint8Array; tail: Uint8Array }>();
   const centre = new Float64Array(2);
   const gridName = JSON.stringify(grid.name);
-  const featureStart = piece('{"type":"Feature","properties":{"slice":');
-  const occurrences = piece(',"occurrences":');
+  // Fixed text joined into as few pieces as possible: each piece is one copy per feature.
+  const firstFeature = piece('{"type":"Feature","properties":{"slice":');
+  const nextFeature = piece(',\n{"type":"Feature","properties":{"slice":');
   const collections = piece(',"collections":');
   const taxa = piece(',"taxa":');
-  const separator = piece(',\n');
   const out = new AsciiWriter();
   out.bytes(piece('{"type":"FeatureCollection","features":[\n'));
   for (let k = 0; k < cells.count; k++) {
@@ -32,14 +32,12 @@ export function* cellsGeoJson(cells: CellTallies, grid: EqualAreaGrid): Generato
     if (shared === undefined) {
       grid.cellCentreInto(cell, centre);
       shared = {
-        head: piece(`,"grid":${gridName},"cell":${cell},"cell_lat":${fixed(centre[0], DECIMALS.degrees)},"cell_lon":${fixed(centre[1], DECIMALS.degrees)}`),
+        head: piece(`,"grid":${gridName},"cell":${cell},"cell_lat":${fixed(centre[0], DECIMALS.degrees)},"cell_lon":${fixed(centre[1], DECIMALS.degrees)},"occurrences":`),
         tail: piece(`},"geometry":${cellGeometry(grid, cell)}}`),
       };
       perCell.set(cell, shared);
     }
-    if (k > 0) out.bytes(separator);
-    out.bytes(featureStart).unsigned(cells.slice[k] + 1).bytes(shared.head);
-    out.bytes(occurrences).unsigned(cells.occurrences[k]);
+    out.bytes(k === 0 ? firstFeature : nextFeature).unsigned(cells.slice[k] + 1).bytes(shared.head).unsigned(cells.occurrences[k]);
     out.bytes(collections).unsigned(cells.collections[k]);
     out.bytes(taxa).unsigned(cells.taxa[k]);
     out.bytes(shared.tail);
