@@ -15,6 +15,7 @@ import { blobText } from './stream-source';
 /** Media type of each export file, for the download. */
 const MEDIA_TYPES: Readonly<Record<ExportFile, string>> = {
   'slices.csv': 'text/csv', 'cells.csv': 'text/csv', 'cells.geojson': 'application/geo+json', 'rejects.csv': 'text/csv', 'session.json': 'application/json',
+  'curves.csv': 'text/csv', 'regions.geojson': 'application/geo+json',
 };
 
 const encoder = new TextEncoder();
