@@ -38,7 +38,11 @@ export function runCurves(run: Run, table: OccurrenceTable): CurvesRun {
   const measures: Readonly<Record<(typeof FOOTPRINT_MEASURES)[number], (slice: SliceMetrics) => number>> = {
     cells: (slice) => slice.cells, mst_km: (slice) => slice.mstKm, lat_span: (slice) => slice.latSpan, collections: (slice) => slice.collections,
   };
-  const footprint: NamedSeries[] = FOOTPRINT_MEASURES.map((name) => ({ name, values: Float64Array.from(result.slices, measures[name]) }));
+  // An empty slice has no footprint to compare (mst_km is already undefined there): every measure
+  // is NaN for it, so that all four correlations use the same steps between sampled slices.
+  const footprint: NamedSeries[] = FOOTPRINT_MEASURES.map((name) => ({
+    name, values: Float64Array.from(result.slices, (slice) => (slice.occurrences > 0 ? measures[name](slice) : Number.NaN)),
+  }));
   const richness = richnessCurves(input, {
     quorum: curves.quorum,
     trials: curves.trials,
