@@ -151,6 +151,12 @@ describe('driftgrid curves on a small hand-counted table', () => {
     expect(run.stderr).toContain('--region-km');
   });
 
+  it('documents every curves.csv column in the README export contract', () => {
+    const readme = readFileSync(join(__dirname, '..', '..', 'README.md'), 'utf8');
+    const contract = readme.slice(readme.indexOf('**`curves.csv`**'), readme.indexOf('**`regions.geojson`**'));
+    for (const column of CURVES_HEADER.split(',').slice(4)) expect(contract, column).toContain(`\`${column}\``);
+  });
+
   it('coverage does not take the curves options', async () => {
     const run = await runCli('coverage', input, '--quorum', '0.5', '--out', join(dir, 'cov'));
     expect(run.status).toBe(1);
