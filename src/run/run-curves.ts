@@ -6,10 +6,10 @@ import { DEFAULT_CURVES_SETTINGS, type CurvesSettings } from './curves-settings'
 import type { Run } from './run-analysis';
 
 /** The footprint measures the sampling-shift flag and the correlations compare richness with (slices.csv names). */
-export const FOOTPRINT_MEASURES = ['cells', 'mst_km', 'lat_span', 'collections'] as const;
+const FOOTPRINT_MEASURES = ['cells', 'mst_km', 'lat_span', 'collections'] as const;
 
 /** The curves settings of a run: its own, or the defaults when it gave none. */
-export function curvesSettingsOf(run: Pick<Run, 'settings'>): CurvesSettings {
+function curvesSettingsOf(run: Pick<Run, 'settings'>): CurvesSettings {
   return run.settings.curves ?? DEFAULT_CURVES_SETTINGS;
 }
 

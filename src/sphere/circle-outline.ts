@@ -2,7 +2,7 @@ import { DEGREES, RADIANS } from './earth';
 import { splitAtAntimeridian, type Ring } from './split-antimeridian';
 
 /** Vertices of a circle outline: a step of 4° of azimuth, short against the radii regions use. */
-export const CIRCLE_STEPS = 90;
+const CIRCLE_STEPS = 90;
 
 // A vertex this close to ±180° would be written as the cut's own vertex: left out, so no position repeats.
 const CUT_MARGIN_DEG = 1e-6;

@@ -14,4 +14,4 @@ export { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongi
 export { splitAtAntimeridian } from './split-antimeridian';
 export { hullLever, type HullLever } from './hull-lever';
 export { spanWithoutDeg } from './span-without';
-export { circleOutline, CIRCLE_STEPS } from './circle-outline';
+export { circleOutline } from './circle-outline';
