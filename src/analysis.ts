@@ -52,6 +52,19 @@ export interface AnalysisResult {
   readonly shapes: readonly FootprintShapes[];
   /** Placed rows grouped by slice: rows of slice s are order[start[s]] … order[start[s + 1] − 1]. */
   readonly rowsBySlice: { readonly order: Uint32Array; readonly start: Uint32Array };
+  /** The placed rows' columns in that order (k-th entry: table row order[k]), as the cell tallies used them. */
+  readonly rows: SliceRows;
+}
+
+/** Columns of the placed rows in slice order (see AnalysisResult.rowsBySlice). */
+export interface SliceRows {
+  readonly start: Uint32Array;
+  readonly taxon: Uint32Array;
+  /** Collection codes, or per-slice position codes when the table names no collections. */
+  readonly collection: Uint32Array;
+  /** Collection codes lie below this. */
+  readonly collectionCount: number;
+  readonly cell: Uint32Array;
 }
 
 /** The whole computation from accepted occurrences to per-slice footprint and gridded coverage. */
@@ -72,15 +85,16 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
   const lat = gather(palaeoLat, order);
   const lon = gather(palaeoLon, order);
   const places = slicePositions(lat, lon, start);
-  const rows = {
+  const rows: SliceRows = {
     start,
     cell: new Uint32Array(order.length),
     collection: collectionsArePositions ? places.codes : gather(table.collection.codes, order),
+    collectionCount: collectionsArePositions ? places.mostInOneSlice : table.collection.values.length,
     taxon: gather(table.taxon.codes, order),
   };
   grid.cellsOf(lat, lon, rows.cell);
 
-  const collectionCounter = new DistinctCounter(collectionsArePositions ? places.mostInOneSlice : table.collection.values.length);
+  const collectionCounter = new DistinctCounter(rows.collectionCount);
   const taxonCounter = new DistinctCounter(table.taxon.values.length);
   const cells = tallyCells(rows, collectionCounter, taxonCounter);
 
@@ -123,6 +137,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     places: { lat: places.lat, lon: places.lon },
     shapes,
     rowsBySlice: { order, start },
+    rows,
   };
 }
 

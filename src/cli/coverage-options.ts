@@ -18,7 +18,10 @@ export interface CoverageOptions {
 export const DEFAULT_OUT = 'results';
 
 /** Options that a session file fixes; giving them beside --session would be ambiguous. */
-const SESSION_FIXED = ['bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rotate-at', 'prefer-model', 'beyond-model'] as const;
+const SESSION_FIXED = [
+  'bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rotate-at', 'prefer-model', 'beyond-model',
+  'quorum', 'trials', 'rarefy', 'age-trials', 'region-km',
+] as const;
 /** Options that only mean something with a rotation model. */
 const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
 
@@ -29,22 +32,37 @@ const COVERAGE_OPTIONS = {
   session: { type: 'string' },
 } as const satisfies NonNullable<ParseArgsConfig['options']>;
 
-export function parseCoverageOptions(args: readonly string[]): CoverageOptions {
+/** `curves` reads what `coverage` reads, and how richness is standardised. */
+const CURVES_OPTIONS = {
+  ...COVERAGE_OPTIONS,
+  quorum: { type: 'string' },
+  trials: { type: 'string' },
+  rarefy: { type: 'string' },
+  'age-trials': { type: 'string' },
+  'region-km': { type: 'string' },
+} as const satisfies NonNullable<ParseArgsConfig['options']>;
+
+type CurvesOptionName = Exclude<keyof typeof CURVES_OPTIONS, keyof typeof COVERAGE_OPTIONS>;
+
+/** The options of `coverage`, or of `curves` (which also reads the curves settings). */
+export function parseCoverageOptions(args: readonly string[], command: 'coverage' | 'curves' = 'coverage'): CoverageOptions {
   let parsed;
   try {
-    parsed = parseArgs({ args: [...args], allowPositionals: true, strict: true, options: COVERAGE_OPTIONS });
+    parsed = parseArgs({ args: [...args], allowPositionals: true, strict: true, options: command === 'curves' ? CURVES_OPTIONS : COVERAGE_OPTIONS });
   } catch (error) {
     throw usageError(error);
   }
-  const { values, positionals } = parsed;
-  if (positionals.length > 1) throw new Error(`coverage takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);
+  // Both option sets as one shape: the curves options are simply absent for coverage.
+  const values: typeof parsed.values & { readonly [name in CurvesOptionName]?: string } = parsed.values;
+  const { positionals } = parsed;
+  if (positionals.length > 1) throw new Error(`${command} takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);
   if (values.session !== undefined) {
     const clash = SESSION_FIXED.filter((name) => values[name] !== undefined);
     if (clash.length > 0 || positionals.length > 0) {
       throw new Error(`--session fixes the input table and the settings; leave out ${[...clash.map((n) => `--${n}`), ...positionals].join(', ')}.`);
     }
   } else if (positionals.length === 0) {
-    throw new Error('coverage needs an occurrence table: driftgrid coverage <occurrences.csv> [options]. See `driftgrid --help`.');
+    throw new Error(`${command} needs an occurrence table: driftgrid ${command} <occurrences.csv> [options]. See \`driftgrid --help\`.`);
   } else if (values.rotation === undefined) {
     const orphans = NEED_ROTATION.filter((name) => values[name] !== undefined);
     if (orphans.length > 0) throw new Error(`${orphans.map((n) => `--${n}`).join(', ')} need${orphans.length === 1 ? 's' : ''} a rotation model: add --rotation <poles.csv>.`);

@@ -3,6 +3,8 @@ export const HELP = `driftgrid — the geographic footprint of fossil occurrence
 Usage:
   driftgrid coverage <occurrences.csv|tsv> [options]
   driftgrid coverage --session <results/session.json> --out <folder>
+  driftgrid curves <occurrences.csv|tsv> [options] [--quorum Q] [--trials N] [--rarefy N]
+                   [--age-trials N] [--region-km KM]
   driftgrid reconstruct <table.csv|tsv> --rotation <poles.csv> [options]
   driftgrid reconstruct <land.geojson> --rotation <poles.csv> [--bins …] [--single-file] [--out <folder>]
   driftgrid --version
@@ -10,6 +12,11 @@ Usage:
 coverage: read an occurrence table, bin it into time slices, place every occurrence on the
 palaeoglobe, grid it on an equal-area grid and write slices.csv, cells.csv, cells.geojson,
 rejects.csv and session.json.
+
+curves: the coverage run, then richness slice by slice, raw and standardised (SQS, shared cells,
+circular regions, rarefaction), beside the footprint; writes curves.csv, regions.geojson,
+rejects.csv and session.json, and flags slices where raw richness moved with the footprint but
+standardised richness did not.
 
 reconstruct: carry present-day positions back with a rotation model. A table is written back
 unchanged with palaeo_lat, palaeo_lon and reconstruction_age_ma appended (<name>-reconstructed.csv,
@@ -22,7 +29,7 @@ Options:
                          table (name, base_ma, top_ma). Default: stages
   --assign midpoint|within|overlap:F|random
                          how an occurrence's age range picks a slice. Default: midpoint
-  --seed N               seed for --assign random. Default: 1
+  --seed N               seed for --assign random and every draw of curves. Default: 1
   --grid healpix:NSIDE|bands:DEG
                          equal-area grid (coverage). Default: healpix:32
   --map field=column     use this column for a field (repeatable), e.g. --map taxon=genus_name
@@ -35,10 +42,15 @@ Options:
   --beyond-model reject|clamp
                          an age older than the model reaches for a plate: leave the row out
                          (listed in rejects.csv), or place it at the oldest age reached. Default: reject
+  --quorum Q             curves: SQS target coverage, 0 < Q <= 1. Default: 0.5
+  --trials N             curves: SQS trials per slice. Default: 200
+  --rarefy N             curves: rarefied richness in N occurrences (Hurlbert). Default: none
+  --age-trials N         curves: raw richness over N draws of each row's age. Default: none
+  --region-km KM         curves: radius of the circular regions, 0 < KM < 10000. Default: 1500
   --single-file          reconstruct GeoJSON: one file, with slice, slice_name and
                          reconstruction_age_ma on every feature
   --out <folder>         where to write the results. Default: results
-  --session <file>       repeat the coverage run recorded in a session file (inputs must be unchanged)
+  --session <file>       repeat the coverage or curves run recorded in a session file (inputs must be unchanged)
   --quiet                print nothing but errors
   -h, --help             this text
 

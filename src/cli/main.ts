@@ -1,4 +1,5 @@
 import { runCoverage } from './coverage-command';
+import { runCurvesCommand } from './curves-command';
 import { runReconstruct } from './reconstruct-command';
 import { HELP } from './help';
 import { TOOL_VERSION } from '../version';
@@ -13,6 +14,8 @@ export async function main(argv: readonly string[]): Promise<number> {
     switch (command) {
       case 'coverage':
         return await runCoverage(rest);
+      case 'curves':
+        return await runCurvesCommand(rest);
       case 'reconstruct':
         return await runReconstruct(rest);
       case '--version':
@@ -26,7 +29,7 @@ export async function main(argv: readonly string[]): Promise<number> {
         process.stdout.write(HELP);
         return 0;
       default:
-        throw new Error(`Unknown command "${command}". Commands: coverage, reconstruct. See \`driftgrid --help\`.`);
+        throw new Error(`Unknown command "${command}". Commands: coverage, curves, reconstruct. See \`driftgrid --help\`.`);
     }
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);

@@ -24,6 +24,11 @@ interface SettingOptions {
   readonly 'rotate-at'?: string;
   readonly 'prefer-model'?: boolean;
   readonly 'beyond-model'?: string;
+  readonly quorum?: string;
+  readonly trials?: string;
+  readonly rarefy?: string;
+  readonly 'age-trials'?: string;
+  readonly 'region-km'?: string;
 }
 
 /**
@@ -41,6 +46,11 @@ export function settingsFromOptions(values: SettingOptions): { settings: RunSett
     rotateAt: values['rotate-at'],
     preferModel: values['prefer-model'],
     beyondModel: values['beyond-model'],
+    quorum: values.quorum,
+    trials: values.trials,
+    rarefy: values.rarefy,
+    ageTrials: values['age-trials'],
+    regionKm: values['region-km'],
   };
   const given = Object.fromEntries(Object.entries(raw).filter(([, value]) => value !== undefined));
   return { settings: parseRunSettings(given, { naming: 'option' }), binsFile };

@@ -16,6 +16,8 @@ export interface RunSummary {
   readonly loneOldest?: LoneOldestRow;
   readonly written: readonly string[];
   readonly elapsedMs: number;
+  /** Lines a command adds before the files written (the curves' quorum, flags and correlations). */
+  readonly details?: readonly string[];
 }
 
 const n = (value: number) => value.toLocaleString('en');
@@ -35,6 +37,7 @@ export function printSummary(summary: RunSummary): void {
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);
   out.push(...cautionLines(result.slices));
   if (result.collectionsArePositions) out.push('  the table names no collections: "collections" counts distinct positions');
+  out.push(...(summary.details ?? []));
   out.push(`wrote ${summary.written.join(', ')}`);
   out.push(`elapsed: ${(summary.elapsedMs / 1000).toFixed(2)} s`);
   process.stdout.write(out.join('\n') + '\n');

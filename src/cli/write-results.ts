@@ -3,7 +3,7 @@ import { mkdir, realpath, writeFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
-import { EXPORT_FILES, exportFileChunks, type ExportSource } from '../run';
+import { EXPORT_FILES, exportFileChunks, type ExportFile, type ExportSource } from '../run';
 
 /**
  * Creates `folder` when missing and returns the paths of `names` in it. Refuses when any of them
@@ -33,9 +33,11 @@ export async function writeResults(folder: string, files: Readonly<Record<string
  * each streamed to disk chunk by chunk as it is made, so that memory stays bounded however large
  * the cell files grow.
  */
-export async function writeExports(folder: string, source: ExportSource, inputs: readonly string[]): Promise<string[]> {
-  const targets = await prepareTargets(folder, EXPORT_FILES, inputs);
-  for (const [k, name] of EXPORT_FILES.entries()) await writeChunks(targets[k], exportFileChunks(source, name));
+export async function writeExports(
+  folder: string, source: ExportSource, inputs: readonly string[], names: readonly ExportFile[] = EXPORT_FILES,
+): Promise<string[]> {
+  const targets = await prepareTargets(folder, names, inputs);
+  for (const [k, name] of names.entries()) await writeChunks(targets[k], exportFileChunks(source, name));
   return targets;
 }
 

@@ -22,4 +22,4 @@ export function trimmed(value: number, decimals: number): string {
 }
 
 /** Decimals written for each kind of number (documented in the README's export contract). */
-export const DECIMALS = { degrees: 6, areaKm2: 1, lengthKm: 3, ageMa: 6 } as const;
+export const DECIMALS = { degrees: 6, areaKm2: 1, lengthKm: 3, ageMa: 6, richness: 3, coverage: 6 } as const;

@@ -29,6 +29,12 @@ export interface SessionSettings {
   readonly preferModel?: boolean;
   /** `reject` or `clamp`. */
   readonly beyondModel?: string;
+  /** The curves command's settings (absent in coverage sessions). */
+  readonly quorum?: number;
+  readonly trials?: number;
+  readonly rarefy?: number;
+  readonly ageTrials?: number;
+  readonly regionKm?: number;
 }
 
 export interface Session {

@@ -1,4 +1,6 @@
 import { cellsCsv } from '../export/cells-csv';
+import { curvesCsv } from '../export/curves-csv';
+import { regionsGeoJson } from '../export/regions-geojson';
 import { cellsGeoJson } from '../export/cells-geojson';
 import { rejectsCsv } from '../export/rejects-csv';
 import { sessionJson } from '../export/session';
@@ -8,11 +10,14 @@ import type { OccurrenceReadResult } from '../table';
 import { buildSession, type SessionInputs } from './build-session';
 import { readRawRecords } from './read-records';
 import type { Run } from './run-analysis';
+import type { CurvesRun } from './run-curves';
 import type { TextSource } from './text-source';
 
-/** The files a run writes (README, "Exports"), in the order they are written. */
+/** The files a coverage run writes (README, "Exports"), in the order they are written. */
 export const EXPORT_FILES = ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv', 'session.json'] as const;
-export type ExportFile = (typeof EXPORT_FILES)[number];
+/** The files a curves run writes. */
+export const CURVES_FILES = ['curves.csv', 'regions.geojson', 'rejects.csv', 'session.json'] as const;
+export type ExportFile = (typeof EXPORT_FILES)[number] | (typeof CURVES_FILES)[number];
 
 /** A run with the table it read and where that table's text can be read again. */
 export interface ExportSource {
@@ -21,6 +26,8 @@ export interface ExportSource {
   readonly inputs: SessionInputs;
   /** The occurrence table's text, read again for the original text of excluded rows. */
   readonly tableText: TextSource;
+  /** The run's richness curves (runCurves), needed for curves.csv and regions.geojson. */
+  readonly curves?: CurvesRun;
 }
 
 /**
@@ -46,6 +53,15 @@ export async function* exportFileChunks(source: ExportSource, name: ExportFile):
       const originals = await readRawRecords(source.tableText, excludedLines(read.table, exclusions));
       const excluded = excludedRows(read.table, exclusions, placement, run.model, run.settings.rotateAt, originals);
       yield encoder.encode(rejectsCsv([...read.rejects, ...excluded]));
+      return;
+    }
+    case 'curves.csv':
+      yield encoder.encode(curvesCsv(result.slices, curvesOf(source).curves, curvesOf(source).footprint));
+      return;
+    case 'regions.geojson': {
+      const { curves, settings } = curvesOf(source);
+      if (curves.regional === undefined) throw new Error('regions.geojson needs the circular regions of the run');
+      yield encoder.encode(regionsGeoJson(result.slices, curves.regional, grid, settings.regionKm));
       return;
     }
     case 'session.json': {
@@ -75,3 +91,8 @@ export async function exportFileBytes(source: ExportSource, name: ExportFile): P
 }
 
 const encoder = new TextEncoder();
+
+function curvesOf(source: ExportSource): CurvesRun {
+  if (source.curves === undefined) throw new Error('curves.csv and regions.geojson need the curves of the run (runCurves)');
+  return source.curves;
+}

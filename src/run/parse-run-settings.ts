@@ -5,7 +5,8 @@ import { isSeed } from '../time';
 import { ASSIGN_EXPECTED, assignChoiceOf } from './assign-choice';
 import { BINS_EXPECTED, binsChoiceOf } from './bins-choice';
 import { GRID_EXPECTED, gridChoiceOf } from './grid-choice';
-import { DEFAULT_RUN_SETTINGS, RUN_SETTING_NAMES, type RunSettingName, type RunSettings } from './run-settings';
+import { CURVES_EXPECTED, CURVES_VALID, DEFAULT_CURVES_SETTINGS, type CurvesSettings } from './curves-settings';
+import { CURVES_SETTING_NAMES, DEFAULT_RUN_SETTINGS, RUN_SETTING_NAMES, type RunSettingName, type RunSettings } from './run-settings';
 
 /**
  * Where settings come from, which decides how a field is named in a problem: command-line
@@ -21,6 +22,7 @@ export interface SettingsSource {
 const OPTION_NAMES: Readonly<Record<RunSettingName, string>> = {
   bins: '--bins', assign: '--assign', seed: '--seed', grid: '--grid', map: '--map',
   rotateAt: '--rotate-at', preferModel: '--prefer-model', beyondModel: '--beyond-model',
+  quorum: '--quorum', trials: '--trials', rarefy: '--rarefy', ageTrials: '--age-trials', regionKm: '--region-km',
 };
 
 /** Settings a session file must give (format 1 had these; the rotation settings came with format 2). */
@@ -78,9 +80,37 @@ export function parseRunSettings(given: object, source: SettingsSource): RunSett
     rotateAt: oneOf<RotateAt>('rotateAt', ROTATE_AT, DEFAULT_RUN_SETTINGS.rotateAt),
     preferModel: booleanOf(raw.preferModel, () => refuse('preferModel', raw.preferModel, 'true or false')),
     beyondModel: oneOf<BeyondModel>('beyondModel', BEYOND_MODEL, DEFAULT_RUN_SETTINGS.beyondModel),
+    ...curvesOf(raw, refuse),
   };
   problems.throwIfAny(source.name);
   return settings;
+}
+
+/**
+ * The curves settings when any of them is given (the rest take their defaults); none for a run
+ * that gives none, so a coverage session reads and writes as before.
+ */
+function curvesOf(raw: Readonly<Record<string, unknown>>, refuse: (name: string, value: unknown, expected: string) => void): { curves?: CurvesSettings } {
+  if (CURVES_SETTING_NAMES.every((name) => raw[name] === undefined)) return {};
+  const read = (name: (typeof CURVES_SETTING_NAMES)[number]): number | undefined => {
+    const value = raw[name];
+    if (value === undefined) return undefined;
+    const number = typeof value === 'number' ? value : typeof value === 'string' && value.trim() !== '' ? Number(value) : Number.NaN;
+    if (CURVES_VALID[name](number)) return number;
+    refuse(name, value, CURVES_EXPECTED[name]);
+    return undefined;
+  };
+  const rarefy = read('rarefy');
+  const ageTrials = read('ageTrials');
+  return {
+    curves: {
+      quorum: read('quorum') ?? DEFAULT_CURVES_SETTINGS.quorum,
+      trials: read('trials') ?? DEFAULT_CURVES_SETTINGS.trials,
+      ...(rarefy === undefined ? {} : { rarefy }),
+      ...(ageTrials === undefined ? {} : { ageTrials }),
+      regionKm: read('regionKm') ?? DEFAULT_CURVES_SETTINGS.regionKm,
+    },
+  };
 }
 
 /** A seed as a JSON number or as the digits of an option. */

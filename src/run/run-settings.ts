@@ -2,6 +2,7 @@ import { ROTATE_AT, type RotateAt } from '../placement';
 import { BEYOND_MODEL, type BeyondModel } from '../rotation';
 import type { AssignChoice } from './assign-choice';
 import type { BinsChoice } from './bins-choice';
+import type { CurvesSettings } from './curves-settings';
 import type { GridChoice } from './grid-choice';
 
 /** Every setting that shapes a run's numbers, the same for the command line, the page and session files. */
@@ -16,6 +17,8 @@ export interface RunSettings {
   readonly rotateAt: RotateAt;
   readonly preferModel: boolean;
   readonly beyondModel: BeyondModel;
+  /** Richness standardisation, present for the `curves` command only (coverage sessions stay as they were). */
+  readonly curves?: CurvesSettings;
 }
 
 export const DEFAULT_RUN_SETTINGS: RunSettings = {
@@ -29,6 +32,11 @@ export const DEFAULT_RUN_SETTINGS: RunSettings = {
   beyondModel: BEYOND_MODEL.reject,
 };
 
+/** The names of the curves settings, flat beside the others in session files and messages. */
+export const CURVES_SETTING_NAMES = ['quorum', 'trials', 'rarefy', 'ageTrials', 'regionKm'] as const;
+
 /** The settings' names, in the order session files write them. */
-export const RUN_SETTING_NAMES = ['bins', 'assign', 'seed', 'grid', 'map', 'rotateAt', 'preferModel', 'beyondModel'] as const;
+export const RUN_SETTING_NAMES = [
+  'bins', 'assign', 'seed', 'grid', 'map', 'rotateAt', 'preferModel', 'beyondModel', ...CURVES_SETTING_NAMES,
+] as const;
 export type RunSettingName = (typeof RUN_SETTING_NAMES)[number];

@@ -1,6 +1,7 @@
 import type { SessionSettings } from '../export/session';
 import { assignText } from './assign-choice';
 import { binsText } from './bins-choice';
+import type { CurvesSettings } from './curves-settings';
 import { gridText } from './grid-choice';
 import type { RunSettings } from './run-settings';
 
@@ -15,5 +16,11 @@ export function settingsText(settings: RunSettings): SessionSettings {
     rotateAt: settings.rotateAt,
     preferModel: settings.preferModel,
     beyondModel: settings.beyondModel,
+    ...(settings.curves === undefined ? {} : curvesText(settings.curves)),
   };
+}
+
+function curvesText(curves: CurvesSettings): Pick<SessionSettings, 'quorum' | 'trials' | 'rarefy' | 'ageTrials' | 'regionKm'> {
+  const { quorum, trials, rarefy, ageTrials, regionKm } = curves;
+  return { quorum, trials, ...(rarefy === undefined ? {} : { rarefy }), ...(ageTrials === undefined ? {} : { ageTrials }), regionKm };
 }

@@ -14,3 +14,4 @@ export { ANTIPODAL_ARC, appendArcInterior, appendGreatCircleArc, continuousLongi
 export { splitAtAntimeridian } from './split-antimeridian';
 export { hullLever, type HullLever } from './hull-lever';
 export { spanWithoutDeg } from './span-without';
+export { circleOutline } from './circle-outline';

@@ -151,6 +151,19 @@ describe('the workbench with the demo scenario', () => {
     expect(await page.locator('dg-frame-controls select#bins').inputValue()).toBe('stages');
   });
 
+  test('exports curves.csv identical to the command line for the same settings (curves at their defaults)', async () => {
+    const { page } = opened;
+    await page.locator('dg-frame-controls select#bins').selectOption('stages');
+    await page.locator('dg-frame-controls select').filter({ has: page.locator('option[value="16"]') }).selectOption('16');
+    await waitReady(page);
+    const out = mkdtempSync(join(tmpdir(), 'dg-e2e-curves-'));
+    const run = await runCli('curves', `${DEMO}/occurrences.csv`, '--rotation', `${DEMO}/poles.csv`, '--bins', 'stages', '--grid', 'healpix:16', '--out', out, '--quiet');
+    expect(run.status, run.stderr).toBe(0);
+    const download = page.waitForEvent('download');
+    await page.locator('dg-export-menu button[data-export="curves.csv"]').click();
+    expect(readFileSync(await (await download).path(), 'utf8')).toBe(readFileSync(join(out, 'curves.csv'), 'utf8'));
+  });
+
   test('shows the equal-area map and the curves with drawn content (screenshots kept)', async () => {
     const { page } = opened;
     await page.locator('dg-display-controls select[name="map-view"]').selectOption('equal-earth');

@@ -75,11 +75,25 @@ describe('run settings', () => {
     ['beyondModel', 'wrap', 'reject or clamp'],
     ['preferModel', 'yes', 'true or false'],
     ['bins', 7, 'periods, epochs, stages, equal:N (N-Myr bins, e.g. equal:10) or file (an own bins table)'],
-    ['colour', 'red', 'one of the settings bins, assign, seed, grid, map, rotateAt, preferModel, beyondModel'],
+    ['colour', 'red', 'one of the settings bins, assign, seed, grid, map, rotateAt, preferModel, beyondModel, quorum, trials, rarefy, ageTrials, regionKm'],
+    ['quorum', 0, 'a number above 0 and at most 1, e.g. 0.5'],
+    ['trials', 2.5, 'a whole number from 1 to 100000'],
+    ['rarefy', 0, 'a whole number of occurrences, at least 1'],
+    ['ageTrials', -3, 'a whole number from 1 to 100000'],
+    ['regionKm', 10000, 'a distance in km above 0 and below 10000'],
   ])('refuse %s %j, naming the field, the value and what was expected', (name, value, expected) => {
     const shown = typeof value === 'string' ? value : JSON.stringify(value);
     expect(refusal({ ...REQUIRED, [name]: value }, { name: 'session.json', naming: 'setting' }))
       .toBe(`session.json, settings.${name} "${shown}": expected ${expected}`);
+  });
+
+  it('read the curves settings only when one is given, the rest at their defaults, and write them back', () => {
+    expect(parseRunSettings(REQUIRED, AS_SETTINGS).curves).toBeUndefined();
+    expect(settingsText(parseRunSettings(REQUIRED, AS_SETTINGS))).not.toHaveProperty('quorum');
+    const given = parseRunSettings({ quorum: '0.4', rarefy: '20' }, AS_OPTIONS);
+    expect(given.curves).toEqual({ quorum: 0.4, trials: 200, rarefy: 20, regionKm: 1500 });
+    expect(parseRunSettings({ ...REQUIRED, ...settingsText(given) }, AS_SETTINGS)).toEqual(given);
+    expect(refusal({ regionKm: 'far' }, AS_OPTIONS)).toBe('--region-km "far": expected a distance in km above 0 and below 10000');
   });
 
   it('name an option as the command line spells it, with the same value and expectation', () => {

@@ -44,6 +44,23 @@ describe('the analysis worker', () => {
     expect(session.tool).toEqual(cliSession.tool);
   });
 
+  it('writes curves.csv and regions.geojson exactly as the command line does for the same settings', async () => {
+    const table = `${DEMO}/occurrences.csv`;
+    const bench = await demoWorkbench(table);
+    const curves = { quorum: 0.5, trials: 50, rarefy: 20, regionKm: 1500 };
+    bench.analyse({ ...DEFAULT_RUN_SETTINGS, seed: 7, grid: { kind: 'healpix', nside: 16 }, curves });
+    const out = mkdtempSync(join(tmpdir(), 'dg-worker-curves-'));
+    const run = await runCli('curves', table, '--grid', 'healpix:16', '--seed', '7', '--quorum', '0.5', '--trials', '50', '--rarefy', '20',
+      '--rotation', `${DEMO}/poles.csv`, '--out', out, '--quiet');
+    expect(run.status).toBe(0);
+    for (const file of ['curves.csv', 'regions.geojson'] as const) {
+      const { bytes } = await bench.exportFile(file);
+      expect(text(bytes), file).toBe(readFileSync(join(out, file), 'utf8'));
+    }
+    const session = JSON.parse(text((await bench.exportFile('session.json')).bytes));
+    expect(session.settings).toEqual(JSON.parse(readFileSync(join(out, 'session.json'), 'utf8')).settings);
+  });
+
   it('refuses settings in a message as a session file refuses them, naming the request', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
     const bad = { ...DEFAULT_RUN_SETTINGS, rotateAt: 'sideways', grid: { kind: 'healpix', nside: 33 } } as unknown as RunSettings;

@@ -1,11 +1,14 @@
 /** Exports: the command line's files (written by the worker) and the current figures. */
 import { css, html, nothing } from 'lit';
-import { EXPORT_FILES } from '../protocol';
+import { EXPORT_FILES, type ExportFile } from '../protocol';
 import { panelStyles } from './shared-styles';
 import { WorkbenchPanel } from './workbench-panel';
 
 export type Figure = 'map' | 'curves' | 'latitude';
 export type FigureFormat = 'svg' | 'png';
+
+/** The coverage files, then the curves' own (computed on request with the run's curves settings, or their defaults). */
+const FILES: readonly ExportFile[] = [...EXPORT_FILES, 'curves.csv', 'regions.geojson'];
 
 const FIGURE_LABELS: Readonly<Record<Figure, string>> = { map: 'Map', curves: 'Curves', latitude: 'Latitude panel' };
 
@@ -26,7 +29,7 @@ export class DgExportMenu extends WorkbenchPanel {
     return html`
       <h2>Export</h2>
       <div class="buttons" role="group" aria-label="Result files">
-        ${EXPORT_FILES.map((file) => html`<button ?disabled=${disabled} data-export=${file} @click=${() => void this.actions?.exportFile(file)}>${file}</button>`)}
+        ${FILES.map((file) => html`<button ?disabled=${disabled} data-export=${file} @click=${() => void this.actions?.exportFile(file)}>${file}</button>`)}
       </div>
       <div class="buttons" role="group" aria-label="Figures of the current slice">
         ${Object.entries(FIGURE_LABELS).map(([figure, label]) => html`

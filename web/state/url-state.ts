@@ -53,7 +53,7 @@ export function decodeUrlState(hash: string): { state: UrlState; ignored: string
   };
   const isText = (v: string): v is string => v.length > 0 && v.length <= 200;
   // Each setting read by the one settings reader; a value it refuses is ignored (and listed).
-  const setting = <K extends RunSettingName>(name: K, key: string): RunSettings[K] => {
+  const setting = <K extends RunSettingName & keyof RunSettings>(name: K, key: string): RunSettings[K] => {
     const value = p.get(key);
     if (value === null) return DEFAULT_RUN_SETTINGS[name];
     try {

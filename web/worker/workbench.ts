@@ -6,7 +6,9 @@ import { analyse } from '../../src/analysis';
 import type { SessionInput } from '../../src/export/session';
 import type { PlateFeature } from '../../src/placement';
 import { createRotationModel } from '../../src/rotation';
-import { exportFileBytes, parseRunSettings, runAnalysis, settingsText, type Run, type RunSettings, type SessionInputs } from '../../src/run';
+import {
+  exportFileBytes, parseRunSettings, runAnalysis, runCurves, settingsText, type CurvesRun, type Run, type RunSettings, type SessionInputs,
+} from '../../src/run';
 import type { AnalysisView, ExportFile, ExtraRole } from '../protocol';
 import { buildView, type IndicatorAnalysis } from './build-view';
 import type { LoadedExtra, LoadedTable } from './read-inputs';
@@ -15,12 +17,15 @@ import { blobText } from './stream-source';
 /** Media type of each export file, for the download. */
 const MEDIA_TYPES: Readonly<Record<ExportFile, string>> = {
   'slices.csv': 'text/csv', 'cells.csv': 'text/csv', 'cells.geojson': 'application/geo+json', 'rejects.csv': 'text/csv', 'session.json': 'application/json',
+  'curves.csv': 'text/csv', 'regions.geojson': 'application/geo+json',
 };
 
 export class Workbench {
   private table: LoadedTable | undefined;
   private readonly extras = new Map<ExtraRole, LoadedExtra>();
   private current: Run | undefined;
+  /** The richness curves of the current run, computed when first asked for (with its curves settings, or the defaults). */
+  private currentCurves: CurvesRun | undefined;
 
   setTable(table: LoadedTable): void {
     this.table = table;
@@ -46,6 +51,7 @@ export class Workbench {
     const model = poles === undefined ? undefined : createRotationModel(poles.poles, { beyond: settings.beyondModel });
     const run = runAnalysis(table.read.table, settings, { bins: this.extraInput('bins')?.scale, model });
     this.current = run;
+    this.currentCurves = undefined;
     const polygons = this.extraInput('polygons');
     return buildView({
       settings: checked, scale: run.scale, grid: run.grid, result: run.result, lines: table.read.table.line,
@@ -70,8 +76,14 @@ export class Workbench {
   async exportFile(file: ExportFile): Promise<{ bytes: Uint8Array; mime: string }> {
     const run = this.requireCurrent();
     const table = this.requireTable();
-    const bytes = await exportFileBytes({ run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob) }, file);
-    return { bytes, mime: MEDIA_TYPES[file] };
+    const curves = file === 'curves.csv' || file === 'regions.geojson' ? this.curves(run) : undefined;
+    const source = { run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob), ...(curves === undefined ? {} : { curves }) };
+    return { bytes: await exportFileBytes(source, file), mime: MEDIA_TYPES[file] };
+  }
+
+  private curves(run: Run): CurvesRun {
+    this.currentCurves ??= runCurves(run, this.requireTable().read.table);
+    return this.currentCurves;
   }
 
   /** The loaded files as a session records them: by name, since the page knows no paths. */
