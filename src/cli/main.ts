@@ -1,5 +1,5 @@
 import { runCoverage } from './coverage-command';
-import { runReconstruct } from './reconstruct-command';
+import { runRotate } from './rotate-command';
 import { HELP } from './help';
 import { TOOL_VERSION } from '../version';
 
@@ -13,8 +13,8 @@ export async function main(argv: readonly string[]): Promise<number> {
     switch (command) {
       case 'coverage':
         return await runCoverage(rest);
-      case 'reconstruct':
-        return await runReconstruct(rest);
+      case 'rotate':
+        return await runRotate(rest);
       case '--version':
       case '-v':
         process.stdout.write(`driftgrid ${TOOL_VERSION}\n`);
@@ -26,7 +26,7 @@ export async function main(argv: readonly string[]): Promise<number> {
         process.stdout.write(HELP);
         return 0;
       default:
-        throw new Error(`Unknown command "${command}". Commands: coverage, reconstruct. See \`driftgrid --help\`.`);
+        throw new Error(`Unknown command "${command}". Commands: coverage, rotate. See \`driftgrid --help\`.`);
     }
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
