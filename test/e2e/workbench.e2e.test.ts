@@ -122,7 +122,7 @@ describe('the workbench with the demo scenario', () => {
     const { page } = opened;
     const before = await field(page, 'name');
     await page.locator('dg-frame-controls select').filter({ has: page.locator('option[value="16"]') }).selectOption('16');
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('grid=healpix%3A16');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('grid=healpix%3A16');
     await waitReady(page);
     expect(await field(page, 'name')).toBe(before);
     const { rows } = await cliSlices('--bins', 'stages', '--grid', 'healpix:16');
@@ -143,10 +143,10 @@ describe('the workbench with the demo scenario', () => {
     expect(session.settings).toMatchObject({ bins: 'stages', grid: 'healpix:16', assign: 'mid-age' });
 
     await page.locator('dg-frame-controls select#bins').selectOption('epochs');
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=epochs');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('bins=epochs');
     await waitReady(page);
     await page.locator('dg-import-panel input[name="session"]').setInputFiles(sessionPath);
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=stages');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('bins=stages');
     await waitReady(page);
     expect(await page.locator('dg-frame-controls select#bins').inputValue()).toBe('stages');
   });
