@@ -70,7 +70,7 @@ export interface SliceRows {
 /** The whole computation from accepted occurrences to per-slice footprint and gridded coverage. */
 export function analyse(table: OccurrenceTable, settings: AnalysisSettings): AnalysisResult {
   const { scale, rule, grid } = settings;
-  const assignment = assignSlices(table.maxMa, table.minMa, scale, rule);
+  const assignment = assignSlices(table.oldestMa, table.youngestMa, scale, rule);
   const placement = placeOccurrences(table, assignment, scale, settings.rotation, settings.placement ?? DEFAULT_PLACEMENT);
   const sliceOfRow = assignment.slice; // fresh from assignSlices: ours to mark exclusions in
   const { lat: palaeoLat, lon: palaeoLon } = placement;

@@ -149,7 +149,7 @@ export interface AnalysisView {
   readonly collectionsArePositions: boolean;
   /** Accepted rows left out of every slice (outside the bins, or no palaeoposition). */
   readonly excluded: number;
-  /** Distinct palaeopositions per slice (what hull and MST are measured over). */
+  /** Distinct palaeopositions per slice (what hull and spanning tree are measured over). */
   readonly positions: PointSet;
   readonly cells: CellEntries;
   readonly shapes: CellShapes;

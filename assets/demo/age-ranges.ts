@@ -7,8 +7,8 @@ import { SCENARIO_TOP_MA, stageBase, stageIndexOf, stageTop, STAGE_BASES_MA } fr
 import { uniform, type Rng } from './random';
 
 export interface AgeRange {
-  readonly maxMa: number;
-  readonly minMa: number;
+  readonly oldestMa: number;
+  readonly youngestMa: number;
 }
 
 function rounded(x: number, decimals: number): number {
@@ -19,21 +19,21 @@ function rounded(x: number, decimals: number): number {
 export function reportedRange(ageMa: number, rng: Rng): AgeRange {
   const s = stageIndexOf(ageMa), base = stageBase(s), top = stageTop(s);
   const u = rng();
-  if (u < 0.45) return { maxMa: base, minMa: top };
+  if (u < 0.45) return { oldestMa: base, youngestMa: top };
   if (u < 0.65) {
     const older = s > 0 && (s + 1 === STAGE_BASES_MA.length || rng() < 0.5);
-    return older ? { maxMa: stageBase(s - 1), minMa: top } : { maxMa: base, minMa: stageTop(s + 1) };
+    return older ? { oldestMa: stageBase(s - 1), youngestMa: top } : { oldestMa: base, youngestMa: stageTop(s + 1) };
   }
   if (u < 0.9) {
     const width = Math.min(base - top, uniform(rng, 0.5, 4));
-    const maxMa = Math.min(base, rounded(Math.min(base, ageMa + width * rng()), 1));
-    const minMa = Math.max(top, rounded(maxMa - width, 1));
-    return maxMa > minMa ? { maxMa, minMa } : { maxMa: base, minMa: top };
+    const oldestMa = Math.min(base, rounded(Math.min(base, ageMa + width * rng()), 1));
+    const youngestMa = Math.max(top, rounded(oldestMa - width, 1));
+    return oldestMa > youngestMa ? { oldestMa, youngestMa } : { oldestMa: base, youngestMa: top };
   }
   const half = uniform(rng, 0.1, 0.6);
-  return { maxMa: rounded(ageMa + half, 2), minMa: rounded(Math.max(ageMa - half, SCENARIO_TOP_MA), 2) };
+  return { oldestMa: rounded(ageMa + half, 2), youngestMa: rounded(Math.max(ageMa - half, SCENARIO_TOP_MA), 2) };
 }
 
 export function midpoint(range: AgeRange): number {
-  return (range.maxMa + range.minMa) / 2;
+  return (range.oldestMa + range.youngestMa) / 2;
 }

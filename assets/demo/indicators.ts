@@ -13,7 +13,7 @@ import { uniform, weightedIndex, type Rng } from './random';
 import { SCENARIO_BASE_MA, SCENARIO_TOP_MA } from './stages';
 import type { RotationModel } from '../../src/rotation';
 
-export const INDICATOR_HEADER = 'kind,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id';
+export const INDICATOR_HEADER = 'kind,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id';
 const INDICATOR_KINDS = ['coal', 'evaporite', 'glacial', 'bauxite', 'laterite', 'reef'] as const;
 const INDICATOR_COUNT = 3000;
 
@@ -46,7 +46,7 @@ export function indicatorLines(lands: readonly Landmass[], model: RotationModel,
     const weights = kindWeights(Math.abs(latOfVector(palaeo)), age);
     const kind = INDICATOR_KINDS[weightedIndex(rng, weights, weights.reduce((a, b) => a + b, 0))];
     const [pLat, pLon] = formatPosition(palaeo), [lat, lon] = formatPosition(present);
-    rows.push({ age, line: `${kind},${formatAge(ages.maxMa)},${formatAge(ages.minMa)},${pLat},${pLon},${lat},${lon},${land.plateId}` });
+    rows.push({ age, line: `${kind},${formatAge(ages.oldestMa)},${formatAge(ages.youngestMa)},${pLat},${pLon},${lat},${lon},${land.plateId}` });
   }
   return rows.sort((a, b) => b.age - a.age).map((r) => r.line);
 }

@@ -10,7 +10,7 @@ import { formatAge, formatPosition } from './csv-format';
 import { REALMS, type Clade, type Genus } from './taxa';
 import type { Collection } from './collections';
 
-export const OCCURRENCE_HEADER = 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,environment,group';
+export const OCCURRENCE_HEADER = 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,environment,group';
 
 /** Weight of a genus away from its home landmasses: rare strays. */
 const STRAY_FACTOR = 0.03;
@@ -55,6 +55,6 @@ export function occurrenceLines(
 ): string[] {
   const [palaeoLat, palaeoLon] = formatPosition(c.palaeo);
   const [lat, lon] = formatPosition(c.present);
-  const shared = `${formatAge(c.ages.maxMa)},${formatAge(c.ages.minMa)},${palaeoLat},${palaeoLon},${lat},${lon},${c.plateId},${id},${c.environment}`;
+  const shared = `${formatAge(c.ages.oldestMa)},${formatAge(c.ages.youngestMa)},${palaeoLat},${palaeoLon},${lat},${lon},${c.plateId},${id},${c.environment}`;
   return found.map((i) => `${genera[i].name},${shared},${clades[genera[i].clade].name}`);
 }

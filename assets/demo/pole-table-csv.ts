@@ -6,8 +6,8 @@ import { POLE_TABLE_HEADER, type PoleRow } from './rotation-table';
 
 export function poleTableCsv(rows: readonly PoleRow[]): string {
   const lines = rows.map((r) => [
-    r.plateId, r.ageMa, formatNumber(r.poleLat, POLE_DECIMALS), formatNumber(r.poleLon, POLE_DECIMALS),
-    formatNumber(r.angleDeg, POLE_DECIMALS), r.relativeTo,
+    r.plateId, r.relativeTo, r.ageMa, formatNumber(r.poleLat, POLE_DECIMALS), formatNumber(r.poleLon, POLE_DECIMALS),
+    formatNumber(r.angleDeg, POLE_DECIMALS),
   ].join(','));
   return `${POLE_TABLE_HEADER}\n${lines.join('\n')}\n`;
 }

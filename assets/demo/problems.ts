@@ -8,7 +8,7 @@ import { OCCURRENCE_HEADER } from './occurrences';
 const PROBLEM_FILE_ROWS = 200;
 
 /** Column positions in OCCURRENCE_HEADER. */
-const F = { taxon: 0, maxMa: 1, minMa: 2, palaeoLat: 3, palaeoLon: 4, lat: 5, lon: 6, plateId: 7 } as const;
+const F = { taxon: 0, oldestMa: 1, youngestMa: 2, palaeoLat: 3, palaeoLon: 4, lat: 5, lon: 6, plateId: 7 } as const;
 
 export interface Problem {
   readonly line: number;
@@ -28,11 +28,11 @@ function replaced(fields: readonly string[], changes: ReadonlyArray<readonly [nu
 export const PROBLEMS: readonly Problem[] = [
   { line: 5, field: 'taxon', what: 'taxon is empty', spoil: (f) => replaced(f, [[F.taxon, '']]) },
   { line: 18, field: 'lat', what: 'latitude 95, beyond the pole', spoil: (f) => replaced(f, [[F.lat, '95']]) },
-  { line: 30, field: 'max_ma', what: 'ages reversed (max_ma younger than min_ma)', spoil: (f) => replaced(f, [[F.maxMa, f[F.minMa]], [F.minMa, f[F.maxMa]]]) },
+  { line: 30, field: 'oldest_ma', what: 'ages reversed (oldest_ma younger than youngest_ma)', spoil: (f) => replaced(f, [[F.oldestMa, f[F.youngestMa]], [F.youngestMa, f[F.oldestMa]]]) },
   { line: 43, field: 'palaeo_lat', what: 'decimal comma in a quoted number', spoil: (f) => replaced(f, [[F.palaeoLat, `"${f[F.palaeoLat].replace('.', ',')}"`]]) },
   { line: 57, field: 'lon', what: 'longitude -191.2, beyond -180', spoil: (f) => replaced(f, [[F.lon, '-191.2']]) },
-  { line: 70, field: 'max_ma', what: 'age "~245" is not a number', spoil: (f) => replaced(f, [[F.maxMa, '~245']]) },
-  { line: 84, field: 'min_ma', what: 'negative age -3', spoil: (f) => replaced(f, [[F.minMa, '-3']]) },
+  { line: 70, field: 'oldest_ma', what: 'age "~245" is not a number', spoil: (f) => replaced(f, [[F.oldestMa, '~245']]) },
+  { line: 84, field: 'youngest_ma', what: 'negative age -3', spoil: (f) => replaced(f, [[F.youngestMa, '-3']]) },
   { line: 97, field: 'palaeo_lat', what: 'no position at all (all four coordinates empty)', spoil: (f) => replaced(f, [[F.palaeoLat, ''], [F.palaeoLon, ''], [F.lat, ''], [F.lon, '']]) },
   { line: 110, field: 'plate_id', what: 'no palaeoposition and plate id "n/a", so it cannot be reconstructed', spoil: (f) => replaced(f, [[F.palaeoLat, ''], [F.palaeoLon, ''], [F.plateId, 'n/a']]) },
   { line: 124, field: 'row', what: 'record cut short after 7 fields', spoil: (f) => f.slice(0, 7).join(',') },

@@ -8,4 +8,4 @@ export interface PoleRow {
   readonly relativeTo: number;
 }
 
-export const POLE_TABLE_HEADER = 'plate_id,age_ma,pole_lat,pole_lon,angle_deg,relative_to';
+export const POLE_TABLE_HEADER = 'plate_id,relative_to,age_ma,pole_lat,pole_lon,angle_deg';

@@ -5,8 +5,8 @@ Usage:
   driftgrid coverage --session <results/session.json> --out <folder>
   driftgrid curves <occurrences.csv|tsv> [options] [--quorum Q] [--trials N] [--rarefy N]
                    [--age-trials N] [--region-km KM]
-  driftgrid reconstruct <table.csv|tsv> --rotation <poles.csv> [options]
-  driftgrid reconstruct <land.geojson> --rotation <poles.csv> [--bins …] [--single-file] [--out <folder>]
+  driftgrid rotate <table.csv|tsv> --rotation <poles.csv> [options]
+  driftgrid rotate <land.geojson> --rotation <poles.csv> [--bins …] [--single-file] [--out <folder>]
   driftgrid --version
 
 coverage: read an occurrence table, bin it into time slices, place every occurrence on the
@@ -18,25 +18,25 @@ circular regions, rarefaction), beside the footprint; writes curves.csv, regions
 rejects.csv and session.json, and flags slices where raw richness moved with the footprint but
 standardised richness did not.
 
-reconstruct: carry present-day positions back with a rotation model. A table is written back
-unchanged with palaeo_lat, palaeo_lon and reconstruction_age_ma appended (<name>-reconstructed.csv,
+rotate: carry present-day positions back with a rotation model. A table is written back
+unchanged with palaeo_lat, palaeo_lon and placed_at_ma appended (<name>-rotated.csv,
 and rejects.csv); GeoJSON polygons with a plate_id property are written once per slice
-(slice-001-<name>.geojson …, or one file with --single-file), with reconstruct-notes.csv.
+(slice-001-<name>.geojson …, or one file with --single-file), with rotate-notes.csv.
 
 Options:
   --bins periods|epochs|stages|equal:N|<bins.csv>
                          time slices: a rank of the built-in chart, N-Myr bins, or your own
                          table (name, base_ma, top_ma). Default: stages
-  --assign midpoint|within|overlap:F|random
-                         how an occurrence's age range picks a slice. Default: midpoint
-  --seed N               seed for --assign random and every draw of curves. Default: 1
+  --assign mid-age|whole-range|share:F|draw
+                         how an occurrence's age range picks a slice. Default: mid-age
+  --seed N               seed for --assign draw and every draw of curves. Default: 1
   --grid healpix:NSIDE|bands:DEG
                          equal-area grid (coverage). Default: healpix:32
   --map field=column     use this column for a field (repeatable), e.g. --map taxon=genus_name
-  --rotation <poles.csv> rotation model: plate_id, age_ma, pole_lat, pole_lon, angle_deg, relative_to
+  --rotation <poles.csv> rotation model: plate_id, relative_to, age_ma, pole_lat, pole_lon, angle_deg
   --rotate-at slice|occurrence
-                         reconstruct each row at its slice's mid-age, or at its own age (the
-                         midpoint or random draw of --assign). Default: slice
+                         rotate each row to its slice's mid-age, or to its own age (the
+                         mid-age or draw of --assign). Default: slice
   --prefer-model         coverage: rows with lat, lon and plate_id are placed by the model even
                          when the table gives palaeo_lat/palaeo_lon
   --beyond-model reject|clamp
@@ -47,13 +47,13 @@ Options:
   --rarefy N             curves: rarefied richness in N occurrences (Hurlbert). Default: none
   --age-trials N         curves: raw richness over N draws of each row's age. Default: none
   --region-km KM         curves: radius of the circular regions, 0 < KM < 10000. Default: 1500
-  --single-file          reconstruct GeoJSON: one file, with slice, slice_name and
-                         reconstruction_age_ma on every feature
+  --single-file          rotate GeoJSON: one file, with slice, slice_name and
+                         placed_at_ma on every feature
   --out <folder>         where to write the results. Default: results
   --session <file>       repeat the coverage or curves run recorded in a session file (inputs must be unchanged)
   --quiet                print nothing but errors
   -h, --help             this text
 
-Fields: taxon; max_ma + min_ma or interval; palaeo_lat + palaeo_lon and/or lat + lon + plate_id;
+Fields: taxon; oldest_ma + youngest_ma or interval; palaeo_lat + palaeo_lon and/or lat + lon + plate_id;
 optional collection, reference, environment, group. See README.md for the formats and columns.
 `;

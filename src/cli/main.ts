@@ -1,6 +1,6 @@
 import { runCoverage } from './coverage-command';
 import { runCurvesCommand } from './curves-command';
-import { runReconstruct } from './reconstruct-command';
+import { runRotate } from './rotate-command';
 import { HELP } from './help';
 import { TOOL_VERSION } from '../version';
 
@@ -16,8 +16,8 @@ export async function main(argv: readonly string[]): Promise<number> {
         return await runCoverage(rest);
       case 'curves':
         return await runCurvesCommand(rest);
-      case 'reconstruct':
-        return await runReconstruct(rest);
+      case 'rotate':
+        return await runRotate(rest);
       case '--version':
       case '-v':
         process.stdout.write(`driftgrid ${TOOL_VERSION}\n`);
@@ -29,7 +29,7 @@ export async function main(argv: readonly string[]): Promise<number> {
         process.stdout.write(HELP);
         return 0;
       default:
-        throw new Error(`Unknown command "${command}". Commands: coverage, curves, reconstruct. See \`driftgrid --help\`.`);
+        throw new Error(`Unknown command "${command}". Commands: coverage, curves, rotate. See \`driftgrid --help\`.`);
     }
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);

@@ -1,7 +1,7 @@
 import type { ParseArgsConfig } from 'node:util';
 import { namesBuiltInBins, parseRunSettings, type RunSettings } from '../run';
 
-/** The options `coverage` and `reconstruct` both take, as node:util parseArgs specs. */
+/** The options `coverage` and `rotate` both take, as node:util parseArgs specs. */
 export const SHARED_OPTIONS = {
   bins: { type: 'string' },
   assign: { type: 'string' },

@@ -95,7 +95,7 @@ export function modelNotes(model: RotationModel): string[] {
 function loneOldestLine(row: LoneOldestRow, result: AnalysisResult): string {
   const reach = result.slices.length > 0 ? formatMa(result.slices[0].baseMa) : formatMa(row.ageMa);
   return (
-    `  note: line ${row.line} alone stretches the equal bins back to ${reach} Ma: its max_ma is ${formatMa(row.ageMa)} Ma, ` +
+    `  note: line ${row.line} alone stretches the equal bins back to ${reach} Ma: its oldest_ma is ${formatMa(row.ageMa)} Ma, ` +
     `every other row's is ${formatMa(row.nextAgeMa)} Ma or younger (check that row's age)`
   );
 }

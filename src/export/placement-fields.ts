@@ -1,7 +1,7 @@
 import { DECIMALS, fixed, trimmed } from './csv-text';
 
-/** Columns reconstruct appends to a table, in this order. */
-export const PLACEMENT_COLUMNS = ['palaeo_lat', 'palaeo_lon', 'reconstruction_age_ma'] as const;
+/** Columns rotate appends to a table, in this order. */
+export const PLACEMENT_COLUMNS = ['palaeo_lat', 'palaeo_lon', 'placed_at_ma'] as const;
 
 /**
  * The appended fields of one row, each preceded by `delimiter`: palaeoposition in degrees

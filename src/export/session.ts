@@ -2,10 +2,13 @@ import type { AnalysisResult } from '../analysis';
 /** Format marker and version of session files; bump the version when the shape changes. */
 export const SESSION_FORMAT = 'driftgrid-session';
 /** 2 added the rotation model (inputs.rotation, settings.rotateAt/preferModel/beyondModel); an
- * older tool must refuse such a file rather than rerun it without the model. */
-export const SESSION_FORMAT_VERSION = 2;
-/** Versions this tool reads: a version 1 file is a run without a rotation model. */
-const READABLE_VERSIONS: readonly number[] = [1, 2];
+ * older tool must refuse such a file rather than rerun it without the model. 3 renamed the
+ * assignment rules (`mid-age`, `whole-range`, `share:F`, `draw`) and the age fields of the column
+ * map (`oldest_ma`, `youngest_ma`), which an older tool would not know. */
+export const SESSION_FORMAT_VERSION = 3;
+/** Versions this tool reads: a version 1 file is a run without a rotation model; versions 1 and 2
+ * use the former names, which parseRunSettings (src/run) reads as the present ones. */
+const READABLE_VERSIONS: readonly number[] = [1, 2, 3];
 
 /** An input file as the session recorded it. */
 export interface SessionInput {

@@ -9,8 +9,8 @@
  *   slice never mixes two reconstructions without saying so).
  * - Otherwise lat/lon + plate_id are rotated: to the mid-age of the row's slice (`slice`, so
  *   every point of a slice shares one reconstruction with the base polygons), or to the row's own
- *   age from the slice assignment (`occurrence`: the age-range midpoint, or the random draw).
- * - `modelOnly` (the reconstruct command) ignores the table's palaeocoordinates altogether.
+ *   age from the slice assignment (`occurrence`: the mid-age of the range, or the draw).
+ * - `modelOnly` (the rotate command) ignores the table's palaeocoordinates altogether.
  * - A row in no slice is not placed (PLACEMENT_STATUS.noSlice): it has no age to be placed at.
  */
 import { reconstructPointsInto, ROTATION_STATUS, type RotationModel } from '../rotation';
@@ -59,7 +59,7 @@ const FROM_ROTATION_STATUS: Readonly<Record<number, number>> = {
 };
 
 /** Rows per reconstructPointsInto call: its (plate, age) groups and their matrices live for one
- * call, so where every row has its own age (--rotate-at occurrence with --assign random) they
+ * call, so where every row has its own age (--rotate-at occurrence with --assign draw) they
  * stay a few MB instead of growing with the table. */
 const ROWS_PER_CALL = 1 << 16;
 

@@ -20,7 +20,7 @@ export const PLACEMENT_STATUS = {
   plateNotInModel: 6,
   /** To be reconstructed at an age older than the model reaches for its plate (`--beyond-model reject`). */
   beyondModel: 7,
-  /** To be reconstructed, but the row has no present-day lat/lon (reconstruct ignores table palaeocoordinates). */
+  /** To be reconstructed, but the row has no present-day lat/lon (rotate ignores table palaeocoordinates). */
   noPresentPosition: 8,
 } as const;
 

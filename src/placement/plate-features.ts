@@ -12,8 +12,8 @@ import type { MultiPolygon, Polygon, Position } from 'geojson';
 import { ProblemList, type InputProblem } from '../problems';
 import { MAX_PLATE_ID, parsePlateId } from '../table';
 
-/** Properties reconstruct adds to every feature it writes; an input may not have them already. */
-export const ADDED_PROPERTIES = ['slice', 'slice_name', 'reconstruction_age_ma'] as const;
+/** Properties rotate adds to every feature it writes; an input may not have them already. */
+export const ADDED_PROPERTIES = ['slice', 'slice_name', 'placed_at_ma'] as const;
 
 export interface PlateFeature {
   /** Position in the input, from 1. */
@@ -152,7 +152,7 @@ class Reader {
       this.problem(`${where} plate_id`, raw, `a property plate_id, a whole number from 0 to ${MAX_PLATE_ID}${raw === undefined ? ' (plate_id is missing)' : ''}`);
     }
     for (const name of ADDED_PROPERTIES) {
-      if (name in properties) this.problem(`${where} property ${name}`, properties[name], `no property "${name}": reconstruct adds it to every feature it writes, so rename it`);
+      if (name in properties) this.problem(`${where} property ${name}`, properties[name], `no property "${name}": rotate adds it to every feature it writes, so rename it`);
     }
     const notes: string[] = [];
     const geometry = this.geometry(value.geometry, where, (text) => notes.push(text));

@@ -21,7 +21,7 @@ export const EXCLUSIONS = {
   },
   spansSlices: {
     stage: EXCLUSION_STAGE.slice, field: 'age',
-    reason: 'age range spans more than one slice; the "within" rule needs it inside one slice',
+    reason: 'age range spans more than one slice; the "whole-range" rule needs it inside one slice',
   },
   shareTooSmall: {
     stage: EXCLUSION_STAGE.slice, field: 'age',

@@ -8,9 +8,9 @@ export interface AgeRangeRows {
   readonly taxon: Uint32Array;
   readonly taxonCount: number;
   /** Older end of each row's age range, Ma. */
-  readonly maxMa: Float64Array;
+  readonly oldestMa: Float64Array;
   /** Younger end, Ma. */
-  readonly minMa: Float64Array;
+  readonly youngestMa: Float64Array;
 }
 
 /** Per slice: median and 2.5 / 97.5 % quantiles of raw richness over the age draws. */
@@ -22,7 +22,7 @@ export interface AgeRichness {
 
 /**
  * Raw richness under age uncertainty: `trials` times, every row's age is drawn uniformly in
- * [minMa, maxMa] (Mulberry32 seeded once, draws in order of taxon then row) and placed in the
+ * [youngestMa, oldestMa] (Mulberry32 seeded once, draws in order of taxon then row) and placed in the
  * slice holding it (sliceOfAge, the rule slice assignment uses); a draw outside the scale or in a
  * gap counts in no slice. Each trial counts the distinct taxa per slice; quantiles over trials
  * follow Hyndman & Fan's definition 7. Rows are grouped by taxon so that one stamp per taxon
@@ -35,13 +35,13 @@ export function ageResampledRichness(rows: AgeRangeRows, scale: Pick<TimeScale, 
   // counts[s * trials + trial]: richness of slice s in that trial.
   const counts = new Float64Array(sliceCount * trials);
   const lastTaxon = new Int32Array(sliceCount);
-  const { maxMa, minMa } = rows;
+  const { oldestMa, youngestMa } = rows;
   for (let trial = 0; trial < trials; trial++) {
     lastTaxon.fill(-1);
     for (let t = 0; t < rows.taxonCount; t++) {
       for (let k = byTaxon.first[t]; k < byTaxon.first[t + 1]; k++) {
         const r = byTaxon.rows[k];
-        const age = Math.min(maxMa[r], minMa[r] + random.nextUniform() * (maxMa[r] - minMa[r]));
+        const age = Math.min(oldestMa[r], youngestMa[r] + random.nextUniform() * (oldestMa[r] - youngestMa[r]));
         const s = sliceOfAge(scale.baseMa, scale.topMa, age);
         if (s >= 0 && lastTaxon[s] !== t) {
           lastTaxon[s] = t;

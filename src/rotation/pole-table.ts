@@ -1,6 +1,6 @@
 /**
  * The rotation model's pole table (DESIGN.md): one total-reconstruction pole per plate and age,
- * `plate_id, age_ma, pole_lat, pole_lon, angle_deg, relative_to`. Each row rotates the plate's
+ * `plate_id, relative_to, age_ma, pole_lat, pole_lon, angle_deg`. Each row rotates the plate's
  * present-day positions to where they were at `age_ma`, in the frame of the plate `relative_to`;
  * positive angles turn anticlockwise seen from above the pole (right-hand rule).
  */
@@ -10,8 +10,8 @@ import {
 } from '../table';
 import { quaternionFromPole } from './quaternion';
 
-/** The columns of a pole table, in any order; others are allowed and not used. */
-export const POLE_TABLE_COLUMNS = ['plate_id', 'age_ma', 'pole_lat', 'pole_lon', 'angle_deg', 'relative_to'] as const;
+/** The columns of a pole table, read by name in any order (others are allowed and not used); listed and written in this order. */
+export const POLE_TABLE_COLUMNS = ['plate_id', 'relative_to', 'age_ma', 'pole_lat', 'pole_lon', 'angle_deg'] as const;
 type PoleColumn = (typeof POLE_TABLE_COLUMNS)[number];
 
 /** Two rows for the same plate, age and parent agree when their unit quaternions differ by

@@ -4,6 +4,7 @@ import { BEYOND_MODEL, type BeyondModel } from '../rotation';
 import { isSeed } from '../time';
 import { ASSIGN_EXPECTED, assignChoiceOf } from './assign-choice';
 import { BINS_EXPECTED, binsChoiceOf } from './bins-choice';
+import { presentAssignName, presentFieldName } from './former-names';
 import { GRID_EXPECTED, gridChoiceOf } from './grid-choice';
 import { CURVES_EXPECTED, CURVES_VALID, DEFAULT_CURVES_SETTINGS, type CurvesSettings } from './curves-settings';
 import { CURVES_SETTING_NAMES, DEFAULT_RUN_SETTINGS, RUN_SETTING_NAMES, type RunSettingName, type RunSettings } from './run-settings';
@@ -34,12 +35,14 @@ const MAP_EXPECTED = 'field=column, e.g. taxon=genus_name';
 /**
  * The one reader of run settings. `raw` holds the settings by name, as text (`"equal:10"`,
  * `"healpix:32"`) or JSON values; an absent setting takes its default (a session file must give
- * bins, assign, seed, grid and map). Every unknown or malformed value is reported, by field,
- * value and what was expected, in one InputError.
+ * bins, assign, seed, grid and map). Recorded settings (`naming: 'setting'`) may use the names
+ * of earlier session files (former-names.ts), read as the present ones. Every unknown or
+ * malformed value is reported, by field, value and what was expected, in one InputError.
  */
 export function parseRunSettings(given: object, source: SettingsSource): RunSettings {
   // Any object: a parsed JSON file, options, or SessionSettings; every value is checked below.
   const raw = given as Readonly<Record<string, unknown>>;
+  const recorded = source.naming === 'setting';
   const problems = new ProblemList();
   const fieldOf = (name: string): string => (source.naming === 'option' ? OPTION_NAMES[name as RunSettingName] ?? `--${name}` : `settings.${name}`);
   const refuse = (name: string, value: unknown, expected: string): void => {
@@ -73,10 +76,10 @@ export function parseRunSettings(given: object, source: SettingsSource): RunSett
 
   const settings: RunSettings = {
     bins: choice('bins', binsChoiceOf, BINS_EXPECTED, DEFAULT_RUN_SETTINGS.bins),
-    assign: choice('assign', assignChoiceOf, ASSIGN_EXPECTED, DEFAULT_RUN_SETTINGS.assign),
+    assign: choice('assign', (text) => assignChoiceOf(recorded ? presentAssignName(text) : text), ASSIGN_EXPECTED, DEFAULT_RUN_SETTINGS.assign),
     seed: seedOf(raw.seed, () => refuse('seed', raw.seed, SEED_EXPECTED)),
     grid: choice('grid', gridChoiceOf, GRID_EXPECTED, DEFAULT_RUN_SETTINGS.grid),
-    map: mapOf(raw.map, (value, expected) => refuse('map', value, expected)),
+    map: mapOf(raw.map, recorded ? presentFieldName : (field) => field, (value, expected) => refuse('map', value, expected)),
     rotateAt: oneOf<RotateAt>('rotateAt', ROTATE_AT, DEFAULT_RUN_SETTINGS.rotateAt),
     preferModel: booleanOf(raw.preferModel, () => refuse('preferModel', raw.preferModel, 'true or false')),
     beyondModel: oneOf<BeyondModel>('beyondModel', BEYOND_MODEL, DEFAULT_RUN_SETTINGS.beyondModel),
@@ -129,8 +132,11 @@ function booleanOf(value: unknown, refuse: () => void): boolean {
   return DEFAULT_RUN_SETTINGS.preferModel;
 }
 
-/** Column choices as an object (field → column) or as `field=column` pairs (repeated `--map`). */
-function mapOf(value: unknown, refuse: (value: unknown, expected: string) => void): Record<string, string> {
+/**
+ * Column choices as an object (field → column) or as `field=column` pairs (repeated `--map`),
+ * each field by the name `fieldName` gives it.
+ */
+function mapOf(value: unknown, fieldName: (field: string) => string, refuse: (value: unknown, expected: string) => void): Record<string, string> {
   const map: Record<string, string> = {};
   if (value === undefined) return map;
   if (Array.isArray(value)) {
@@ -140,7 +146,7 @@ function mapOf(value: unknown, refuse: (value: unknown, expected: string) => voi
         refuse(pair, MAP_EXPECTED);
         continue;
       }
-      const field = pair.slice(0, at).trim();
+      const field = fieldName(pair.slice(0, at).trim());
       if (field in map) refuse(pair, `each field named once; ${field} is already mapped to ${map[field]}`);
       else map[field] = pair.slice(at + 1);
     }
@@ -150,9 +156,11 @@ function mapOf(value: unknown, refuse: (value: unknown, expected: string) => voi
     refuse(value, 'an object of field: column');
     return map;
   }
-  for (const [field, column] of Object.entries(value)) {
-    if (typeof column === 'string' && column !== '') map[field] = column;
-    else refuse(column, `the header of the column for ${field}`);
+  for (const [written, column] of Object.entries(value)) {
+    const field = fieldName(written);
+    if (typeof column !== 'string' || column === '') refuse(column, `the header of the column for ${written}`);
+    else if (field in map) refuse(column, `each field named once; ${field} is already mapped to ${map[field]}`);
+    else map[field] = column;
   }
   return map;
 }

@@ -51,7 +51,7 @@ export function runCurves(run: Run, table: OccurrenceTable): CurvesRun {
     regions: { grid, radiusKm: curves.regionKm },
     ...(curves.ageTrials === undefined ? {} : {
       ages: {
-        rows: { taxon: rows.taxon, taxonCount: table.taxon.values.length, maxMa: gather(table.maxMa, order), minMa: gather(table.minMa, order) },
+        rows: { taxon: rows.taxon, taxonCount: table.taxon.values.length, oldestMa: gather(table.oldestMa, order), youngestMa: gather(table.youngestMa, order) },
         scale, trials: curves.ageTrials,
       },
     }),

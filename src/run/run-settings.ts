@@ -9,7 +9,7 @@ import type { GridChoice } from './grid-choice';
 export interface RunSettings {
   readonly bins: BinsChoice;
   readonly assign: AssignChoice;
-  /** Seed of the random assignment: a whole number 0 … 2^32 − 1 (Mulberry32's state). */
+  /** Seed of the drawn assignment (`draw`): a whole number 0 … 2^32 − 1 (Mulberry32's state). */
   readonly seed: number;
   readonly grid: GridChoice;
   /** Explicit column choices, field → column header. */
@@ -23,7 +23,7 @@ export interface RunSettings {
 
 export const DEFAULT_RUN_SETTINGS: RunSettings = {
   bins: { kind: 'chart', rank: 'stages' },
-  assign: { kind: 'midpoint' },
+  assign: { kind: 'mid-age' },
   seed: 1,
   grid: { kind: 'healpix', nside: 32 },
   map: {},

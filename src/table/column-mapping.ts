@@ -129,9 +129,9 @@ function requireSources(header: readonly string[], index: Record<OccurrenceField
   }
   const has = (f: OccurrenceField): boolean => index[f] >= 0;
   if (!has('taxon')) missing(`a taxon column (no taxon column; ${accepted('taxon')})`);
-  requirePair(has, 'max_ma', 'min_ma', missing);
-  if (!has('max_ma') && !has('min_ma') && !has('interval')) {
-    missing(`age columns: max_ma and min_ma, or interval (no age columns; ${accepted('max_ma')}; ${accepted('min_ma')}; ${accepted('interval')})`);
+  requirePair(has, 'oldest_ma', 'youngest_ma', missing);
+  if (!has('oldest_ma') && !has('youngest_ma') && !has('interval')) {
+    missing(`age columns: oldest_ma and youngest_ma, or interval (no age columns; ${accepted('oldest_ma')}; ${accepted('youngest_ma')}; ${accepted('interval')})`);
   }
   requirePair(has, 'palaeo_lat', 'palaeo_lon', missing);
   requirePair(has, 'lat', 'lon', missing);

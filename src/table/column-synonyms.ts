@@ -1,6 +1,6 @@
 /** Our occurrence fields, in the order the README lists them. */
 export const OCCURRENCE_FIELDS = [
-  'taxon', 'max_ma', 'min_ma', 'interval', 'palaeo_lat', 'palaeo_lon', 'lat', 'lon', 'plate_id',
+  'taxon', 'oldest_ma', 'youngest_ma', 'interval', 'palaeo_lat', 'palaeo_lon', 'lat', 'lon', 'plate_id',
   'collection', 'reference', 'environment', 'group',
 ] as const;
 export type OccurrenceField = (typeof OCCURRENCE_FIELDS)[number];
@@ -22,8 +22,8 @@ const prefixed = (prefixes: readonly string[], words: readonly string[]): string
  */
 export const COLUMN_SYNONYMS: Readonly<Record<OccurrenceField, readonly string[]>> = {
   taxon: ['taxon', 'taxon_name', 'taxonomic_name', 'scientific_name', 'genus', 'species'],
-  max_ma: ['max_ma', 'max_age', 'age_max', 'max_age_ma', 'maximum_age', 'oldest_ma', 'oldest_age'],
-  min_ma: ['min_ma', 'min_age', 'age_min', 'min_age_ma', 'minimum_age', 'youngest_ma', 'youngest_age'],
+  oldest_ma: ['oldest_ma', 'oldest_age', 'max_ma', 'max_age', 'age_max', 'max_age_ma', 'maximum_age'],
+  youngest_ma: ['youngest_ma', 'youngest_age', 'min_ma', 'min_age', 'age_min', 'min_age_ma', 'minimum_age'],
   interval: ['interval', 'interval_name', 'time_interval', 'stage'],
   palaeo_lat: prefixed(PALAEO, LAT),
   palaeo_lon: prefixed(PALAEO, LON),

@@ -13,15 +13,15 @@ export interface LoneOldestRow {
   readonly row: number;
   /** Line of the source file on which its record starts. */
   readonly line: number;
-  /** Its max_ma, Ma: where the bins now reach. */
+  /** Its oldest_ma, Ma: where the bins now reach. */
   readonly ageMa: number;
-  /** The oldest max_ma of every other row, Ma. */
+  /** The largest oldest_ma of every other row, Ma. */
   readonly nextAgeMa: number;
 }
 
 /**
- * The row whose max_ma is older than every other row's by more than `widthMa` +
- * LONE_STRETCH_SHARE × the next oldest max_ma, or undefined when there is none (rows sharing the
+ * The row whose oldest_ma is older than every other row's by more than `widthMa` +
+ * LONE_STRETCH_SHARE × the next largest oldest_ma, or undefined when there is none (rows sharing the
  * oldest age are not one row alone; a table of fewer than two rows has nothing to compare).
  */
 export function loneOldestRow(table: OccurrenceTable, widthMa: number): LoneOldestRow | undefined {
@@ -29,7 +29,7 @@ export function loneOldestRow(table: OccurrenceTable, widthMa: number): LoneOlde
   let oldest = -Infinity;
   let next = -Infinity;
   for (let i = 0; i < table.count; i++) {
-    const age = table.maxMa[i];
+    const age = table.oldestMa[i];
     if (age > oldest) {
       next = oldest;
       oldest = age;

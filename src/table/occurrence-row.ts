@@ -13,8 +13,8 @@ export type ResolveInterval = (name: string) => { readonly baseMa: number; reado
 export interface RowValues {
   taxonStart: number;
   taxonEnd: number;
-  maxMa: number;
-  minMa: number;
+  oldestMa: number;
+  youngestMa: number;
   /** NaN where the row has no such pair. */
   palaeoLat: number;
   palaeoLon: number;
@@ -24,7 +24,7 @@ export interface RowValues {
 }
 
 export function createRowValues(): RowValues {
-  return { taxonStart: 0, taxonEnd: 0, maxMa: NaN, minMa: NaN, palaeoLat: NaN, palaeoLon: NaN, lat: NaN, lon: NaN, plateId: NO_PLATE };
+  return { taxonStart: 0, taxonEnd: 0, oldestMa: NaN, youngestMa: NaN, palaeoLat: NaN, palaeoLon: NaN, lat: NaN, lon: NaN, plateId: NO_PLATE };
 }
 
 const AGE = 'an age in Ma before present, 0 or more';
@@ -39,7 +39,7 @@ const listed = (names: readonly string[]): string =>
 
 /**
  * Reads and checks one record whose field count matches the header, without cutting strings on
- * the common path. Ages: max_ma/min_ma when given, the interval when both are blank; none older
+ * the common path. Ages: oldest_ma/youngest_ma when given, the interval when both are blank; none older
  * than the Earth (EARTH_AGE_MA). Returns
  * the first problem found, or undefined with `out` filled.
  */
@@ -71,26 +71,26 @@ export function readRow(record: ScannedRecord, index: ColumnIndex, resolve: Reso
 }
 
 function readAge(record: ScannedRecord, index: ColumnIndex, resolve: ResolveInterval, out: RowValues): RowProblem | undefined {
-  const max = num(record, index.max_ma);
-  const min = num(record, index.min_ma);
-  out.maxMa = max;
-  out.minMa = min;
-  if (max >= min && min >= 0 && max <= EARTH_AGE_MA) return undefined; // the common case; NaN fails these tests
-  const maxText = str(record, index.max_ma);
-  const minText = str(record, index.min_ma);
-  const maxBlank = isBlank(maxText);
-  const minBlank = isBlank(minText);
-  if (maxBlank && minBlank) return readInterval(record, index, resolve, out);
-  if (maxBlank || minBlank) {
-    const [missing, present, text] = maxBlank ? ['max_ma', 'min_ma', minText] : ['min_ma', 'max_ma', maxText];
+  const oldest = num(record, index.oldest_ma);
+  const youngest = num(record, index.youngest_ma);
+  out.oldestMa = oldest;
+  out.youngestMa = youngest;
+  if (oldest >= youngest && youngest >= 0 && oldest <= EARTH_AGE_MA) return undefined; // the common case; NaN fails these tests
+  const oldestText = str(record, index.oldest_ma);
+  const youngestText = str(record, index.youngest_ma);
+  const oldestBlank = isBlank(oldestText);
+  const youngestBlank = isBlank(youngestText);
+  if (oldestBlank && youngestBlank) return readInterval(record, index, resolve, out);
+  if (oldestBlank || youngestBlank) {
+    const [missing, present, text] = oldestBlank ? ['oldest_ma', 'youngest_ma', youngestText] : ['youngest_ma', 'oldest_ma', oldestText];
     const alternative = index.interval >= 0 ? ', or leave both blank to use the interval' : '';
     return { field: missing, reason: `${missing} is blank but ${present} is ${shown(text)}; give both${alternative}` };
   }
-  const problem = checkAge('max_ma', maxText, max) ?? checkAge('min_ma', minText, min);
+  const problem = checkAge('oldest_ma', oldestText, oldest) ?? checkAge('youngest_ma', youngestText, youngest);
   if (problem !== undefined) return problem;
   return {
-    field: 'max_ma',
-    reason: `max_ma ${shown(maxText)} is less than min_ma ${shown(minText)}; max_ma is the older end of the age range (expected max_ma >= min_ma)`,
+    field: 'oldest_ma',
+    reason: `oldest_ma ${shown(oldestText)} is less than youngest_ma ${shown(youngestText)}; oldest_ma is the older end of the age range (expected oldest_ma >= youngest_ma)`,
   };
 }
 
@@ -104,10 +104,10 @@ function checkAge(field: string, text: string, v: number): RowProblem | undefine
 function readInterval(record: ScannedRecord, index: ColumnIndex, resolve: ResolveInterval, out: RowValues): RowProblem | undefined {
   const name = str(record, index.interval).trim();
   if (name.length === 0) {
-    const names = (['max_ma', 'min_ma', 'interval'] as const).filter((f) => index[f] >= 0);
+    const names = (['oldest_ma', 'youngest_ma', 'interval'] as const).filter((f) => index[f] >= 0);
     return {
-      field: index.interval >= 0 ? 'interval' : 'max_ma',
-      reason: `no age: ${listed(names)} ${names.length > 1 ? 'are' : 'is'} blank; expected max_ma and min_ma in Ma, or an interval name`,
+      field: index.interval >= 0 ? 'interval' : 'oldest_ma',
+      reason: `no age: ${listed(names)} ${names.length > 1 ? 'are' : 'is'} blank; expected oldest_ma and youngest_ma in Ma, or an interval name`,
     };
   }
   const unit = resolve(name);
@@ -117,8 +117,8 @@ function readInterval(record: ScannedRecord, index: ColumnIndex, resolve: Resolv
   if (unit.baseMa > EARTH_AGE_MA) {
     return { field: 'interval', reason: `interval ${JSON.stringify(name)} has its base at ${unit.baseMa} Ma, older than the Earth; expected ${WITHIN_EARTH_AGE}` };
   }
-  out.maxMa = unit.baseMa;
-  out.minMa = unit.topMa;
+  out.oldestMa = unit.baseMa;
+  out.youngestMa = unit.topMa;
   return undefined;
 }
 

@@ -23,10 +23,10 @@ export interface OccurrenceTable {
   readonly taxon: CodedColumn;
   /** ABSENT_CODE where the row names no collection. */
   readonly collection: CodedColumn;
-  /** Older end of the age range, Ma (max_ma >= min_ma >= 0). */
-  readonly maxMa: Float64Array;
+  /** Older end of the age range, Ma (oldest_ma >= youngest_ma >= 0). */
+  readonly oldestMa: Float64Array;
   /** Younger end of the age range, Ma. */
-  readonly minMa: Float64Array;
+  readonly youngestMa: Float64Array;
   /** Palaeocoordinates given in the table; NaN where the row has none. */
   readonly palaeoLat: Float64Array;
   readonly palaeoLon: Float64Array;

@@ -21,8 +21,8 @@ export class OccurrenceTableBuilder {
   private reference: Uint32Array | undefined;
   private environment: Uint32Array | undefined;
   private group: Uint32Array | undefined;
-  private maxMa = new Float64Array(INITIAL_CAPACITY);
-  private minMa = new Float64Array(INITIAL_CAPACITY);
+  private oldestMa = new Float64Array(INITIAL_CAPACITY);
+  private youngestMa = new Float64Array(INITIAL_CAPACITY);
   private palaeoLat = new Float64Array(INITIAL_CAPACITY);
   private palaeoLon = new Float64Array(INITIAL_CAPACITY);
   private lat = new Float64Array(INITIAL_CAPACITY);
@@ -54,8 +54,8 @@ export class OccurrenceTableBuilder {
     if (this.reference) this.reference[i] = optionalCode(d.reference, record, index.reference);
     if (this.environment) this.environment[i] = optionalCode(d.environment, record, index.environment);
     if (this.group) this.group[i] = optionalCode(d.group, record, index.group);
-    this.maxMa[i] = row.maxMa;
-    this.minMa[i] = row.minMa;
+    this.oldestMa[i] = row.oldestMa;
+    this.youngestMa[i] = row.youngestMa;
     this.palaeoLat[i] = row.palaeoLat;
     this.palaeoLon[i] = row.palaeoLon;
     this.lat[i] = row.lat;
@@ -76,8 +76,8 @@ export class OccurrenceTableBuilder {
       ...(this.reference ? { reference: coded(this.reference, d.reference) } : {}),
       ...(this.environment ? { environment: coded(this.environment, d.environment) } : {}),
       ...(this.group ? { group: coded(this.group, d.group) } : {}),
-      maxMa: this.maxMa.slice(0, n),
-      minMa: this.minMa.slice(0, n),
+      oldestMa: this.oldestMa.slice(0, n),
+      youngestMa: this.youngestMa.slice(0, n),
       palaeoLat: this.palaeoLat.slice(0, n),
       palaeoLon: this.palaeoLon.slice(0, n),
       lat: this.lat.slice(0, n),
@@ -95,8 +95,8 @@ export class OccurrenceTableBuilder {
     if (this.reference) this.reference = grown(this.reference, size, Uint32Array);
     if (this.environment) this.environment = grown(this.environment, size, Uint32Array);
     if (this.group) this.group = grown(this.group, size, Uint32Array);
-    this.maxMa = grown(this.maxMa, size, Float64Array);
-    this.minMa = grown(this.minMa, size, Float64Array);
+    this.oldestMa = grown(this.oldestMa, size, Float64Array);
+    this.youngestMa = grown(this.youngestMa, size, Float64Array);
     this.palaeoLat = grown(this.palaeoLat, size, Float64Array);
     this.palaeoLon = grown(this.palaeoLon, size, Float64Array);
     this.lat = grown(this.lat, size, Float64Array);

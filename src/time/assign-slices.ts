@@ -26,16 +26,16 @@ function assignPoint(out: SliceAssignment, row: number, scale: TimeScale, ageMa:
   else assign(out, row, s, ageMa);
 }
 
-function midpointRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, out: SliceAssignment): void {
-  for (let r = 0; r < maxMa.length; r++) assignPoint(out, r, scale, 0.5 * (maxMa[r] + minMa[r]));
+function midAgeRule(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, out: SliceAssignment): void {
+  for (let r = 0; r < oldestMa.length; r++) assignPoint(out, r, scale, 0.5 * (oldestMa[r] + youngestMa[r]));
 }
 
-function randomRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, seed: number, out: SliceAssignment): void {
+function drawRule(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, seed: number, out: SliceAssignment): void {
   const random = createSeededRandom(seed);
-  for (let r = 0; r < maxMa.length; r++) {
+  for (let r = 0; r < oldestMa.length; r++) {
     // One draw per row, point ages included, so row r's draw depends only on the seed and r.
-    const age = minMa[r] + random.nextUniform() * (maxMa[r] - minMa[r]);
-    assignPoint(out, r, scale, Math.min(age, maxMa[r]));
+    const age = youngestMa[r] + random.nextUniform() * (oldestMa[r] - youngestMa[r]);
+    assignPoint(out, r, scale, Math.min(age, oldestMa[r]));
   }
 }
 
@@ -45,11 +45,11 @@ function hasGap(scale: TimeScale, first: number, last: number): boolean {
   return false;
 }
 
-function withinRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, out: SliceAssignment): void {
+function wholeRangeRule(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, out: SliceAssignment): void {
   const { baseMa, topMa } = scale;
-  for (let r = 0; r < maxMa.length; r++) {
-    const hi = maxMa[r];
-    const lo = minMa[r];
+  for (let r = 0; r < oldestMa.length; r++) {
+    const hi = oldestMa[r];
+    const lo = youngestMa[r];
     if (hi === lo) {
       assignPoint(out, r, scale, lo);
       continue;
@@ -63,11 +63,11 @@ function withinRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, 
   }
 }
 
-function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, fraction: number, out: SliceAssignment): void {
+function shareRule(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, fraction: number, out: SliceAssignment): void {
   const { baseMa, topMa } = scale;
-  for (let r = 0; r < maxMa.length; r++) {
-    const hi = maxMa[r];
-    const lo = minMa[r];
+  for (let r = 0; r < oldestMa.length; r++) {
+    const hi = oldestMa[r];
+    const lo = youngestMa[r];
     if (hi === lo) {
       assignPoint(out, r, scale, lo); // a point age is wholly (share 1) in its slice
       continue;
@@ -82,7 +82,7 @@ function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale,
     let bestLength = 0;
     for (let i = a; i <= b; i++) {
       const length = Math.min(hi, baseMa[i]) - Math.max(lo, topMa[i]);
-      // >= so that on a tie the younger slice wins, as the midpoint rule would decide.
+      // >= so that on a tie the younger slice wins, as the mid-age rule would decide.
       if (length >= bestLength) {
         bestLength = length;
         best = i;
@@ -94,47 +94,48 @@ function overlapRule(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale,
 }
 
 /**
- * Gives each occurrence (age range minMa..maxMa, Ma, max >= min >= 0) at most one slice of the
- * scale, writing into `out` (no allocation). Slice i holds top < age <= base; age 0 goes to the
- * youngest slice when its top is 0. A range with max == min is treated as a point age by every rule.
+ * Gives each occurrence (age range youngestMa..oldestMa, Ma, oldest >= youngest >= 0) at most one
+ * slice of the scale, writing into `out` (no allocation). Slice i holds top < age <= base; age 0
+ * goes to the youngest slice when its top is 0. A range with oldest == youngest is treated as a
+ * point age by every rule.
  *
- * - `midpoint`: the slice holding (max + min) / 2.
- * - `within`: the slice that holds the whole range. Containment is closed at both ends for a range
- *   of positive length (top <= min and max <= base): its end points carry no weight, so a range
+ * - `mid-age`: the slice holding (oldest + youngest) / 2.
+ * - `whole-range`: the slice that holds the whole range. Containment is closed at both ends for a range
+ *   of positive length (top <= youngest and oldest <= base): its end points carry no weight, so a range
  *   that is exactly a stage lies in that stage. Otherwise ageOutside if part of the range lies
  *   outside every slice (beyond the scale or in a gap), else spansSlices.
- * - `overlap:F`: the slice holding the largest share of the range's length, if that share is at
- *   least F; ties go to the younger slice (agreeing with the midpoint rule, since a range split
- *   evenly across a boundary has its midpoint on that boundary). The share counts the whole range,
+ * - `share:F`: the slice holding the largest share of the range's length, if that share is at
+ *   least F; ties go to the younger slice (agreeing with the mid-age rule, since a range split
+ *   evenly across a boundary has its mid-age on that boundary). The share counts the whole range,
  *   parts outside the scale included. ageOutside if no slice overlaps, else shareTooSmall.
- * - `random`: one seeded uniform draw in [min, max] per row, in row order (Mulberry32).
+ * - `draw`: one seeded uniform draw in [youngest, oldest] per row, in row order (Mulberry32).
  *
- * `out.age` is the midpoint for midpoint, within and overlap, the draw for random; NaN when
+ * `out.age` is the mid-age for mid-age, whole-range and share, the draw for draw; NaN when
  * unassigned. Inputs are trusted (validated where the table is read).
  */
-export function assignSlicesInto(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, rule: AssignRule, out: SliceAssignment): SliceAssignment {
-  const n = maxMa.length;
-  if (minMa.length !== n || out.slice.length !== n || out.reason.length !== n || out.age.length !== n) {
-    throw new RangeError(`Column lengths differ: maxMa ${n}, minMa ${minMa.length}, out ${out.slice.length}/${out.reason.length}/${out.age.length}.`);
+export function assignSlicesInto(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, rule: AssignRule, out: SliceAssignment): SliceAssignment {
+  const n = oldestMa.length;
+  if (youngestMa.length !== n || out.slice.length !== n || out.reason.length !== n || out.age.length !== n) {
+    throw new RangeError(`Column lengths differ: oldestMa ${n}, youngestMa ${youngestMa.length}, out ${out.slice.length}/${out.reason.length}/${out.age.length}.`);
   }
   switch (rule.kind) {
-    case 'midpoint':
-      midpointRule(maxMa, minMa, scale, out);
+    case 'mid-age':
+      midAgeRule(oldestMa, youngestMa, scale, out);
       break;
-    case 'within':
-      withinRule(maxMa, minMa, scale, out);
+    case 'whole-range':
+      wholeRangeRule(oldestMa, youngestMa, scale, out);
       break;
-    case 'overlap':
-      overlapRule(maxMa, minMa, scale, rule.fraction, out);
+    case 'share':
+      shareRule(oldestMa, youngestMa, scale, rule.fraction, out);
       break;
-    case 'random':
-      randomRule(maxMa, minMa, scale, rule.seed, out);
+    case 'draw':
+      drawRule(oldestMa, youngestMa, scale, rule.seed, out);
       break;
   }
   return out;
 }
 
 /** As assignSlicesInto, into new columns. */
-export function assignSlices(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, rule: AssignRule): SliceAssignment {
-  return assignSlicesInto(maxMa, minMa, scale, rule, createSliceAssignment(maxMa.length));
+export function assignSlices(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, rule: AssignRule): SliceAssignment {
+  return assignSlicesInto(oldestMa, youngestMa, scale, rule, createSliceAssignment(oldestMa.length));
 }

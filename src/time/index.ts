@@ -7,7 +7,7 @@ export { formatMa } from './format-ma';
 export { BIN_COLUMNS, binsFromRecords } from './user-bins';
 export { PHANEROZOIC_BASE_MA, parseBinsOption } from './parse-bins';
 export { assignSlices, assignSlicesInto, createSliceAssignment } from './assign-slices';
-export { parseAssignRule } from './parse-assign-rule';
+export { ASSIGN_RULE_EXPECTED, parseAssignRule } from './parse-assign-rule';
 export type { SeededRandom } from './seeded-random';
 export { createSeededRandom, isSeed } from './seeded-random';
 export { sliceOfAge } from './slice-lookup';

@@ -15,16 +15,16 @@ export interface TimeScale {
 
 /** How an occurrence with an age range is given to one slice. */
 export type AssignRule =
-  | { readonly kind: 'midpoint' }
-  | { readonly kind: 'within' }
-  | { readonly kind: 'overlap'; readonly fraction: number }
-  | { readonly kind: 'random'; readonly seed: number };
+  | { readonly kind: 'mid-age' }
+  | { readonly kind: 'whole-range' }
+  | { readonly kind: 'share'; readonly fraction: number }
+  | { readonly kind: 'draw'; readonly seed: number };
 
 export interface SliceAssignment {
   /** Slice index of each row, or -1 where none takes it. */
   readonly slice: Int32Array;
   /** Why each row went to no slice: the EXCLUSION_CODE of a slice-stage reason, NOT_EXCLUDED where assigned. */
   readonly reason: Uint8Array;
-  /** Age used for the row (the midpoint, or the random draw), Ma; NaN where unassigned. */
+  /** Age used for the row (the mid-age, or the draw), Ma; NaN where unassigned. */
   readonly age: Float64Array;
 }

@@ -20,16 +20,16 @@ const WARM_UP = 2;
 const REPETITIONS = 10;
 
 /** Seeded ranges: max uniform over the Phanerozoic, length exponential (mean 5 Myr), 5% points. */
-function makeRanges(oldestMa: number): { maxMa: Float64Array; minMa: Float64Array } {
+function makeRanges(reachMa: number): { oldestMa: Float64Array; youngestMa: Float64Array } {
   const random = createSeededRandom(SEED);
-  const maxMa = new Float64Array(ROWS);
-  const minMa = new Float64Array(ROWS);
+  const oldestMa = new Float64Array(ROWS);
+  const youngestMa = new Float64Array(ROWS);
   for (let r = 0; r < ROWS; r++) {
-    maxMa[r] = random.nextUniform() * oldestMa;
+    oldestMa[r] = random.nextUniform() * reachMa;
     const length = random.nextUniform() < POINT_SHARE ? 0 : -MEAN_RANGE_MYR * Math.log(1 - random.nextUniform());
-    minMa[r] = Math.max(0, maxMa[r] - length);
+    youngestMa[r] = Math.max(0, oldestMa[r] - length);
   }
-  return { maxMa, minMa };
+  return { oldestMa, youngestMa };
 }
 
 function linearSlice(scale: TimeScale, age: number): number {
@@ -59,34 +59,34 @@ function linearLargestShare(scale: TimeScale, lo: number, hi: number, fraction: 
 }
 
 /** The reference: every rule written as a scan over all slices per row. */
-function reference(maxMa: Float64Array, minMa: Float64Array, scale: TimeScale, rule: AssignRule, out: Int32Array): void {
-  const random = rule.kind === 'random' ? createSeededRandom(rule.seed) : undefined;
-  for (let r = 0; r < maxMa.length; r++) {
-    const hi = maxMa[r];
-    const lo = minMa[r];
+function reference(oldestMa: Float64Array, youngestMa: Float64Array, scale: TimeScale, rule: AssignRule, out: Int32Array): void {
+  const random = rule.kind === 'draw' ? createSeededRandom(rule.seed) : undefined;
+  for (let r = 0; r < oldestMa.length; r++) {
+    const hi = oldestMa[r];
+    const lo = youngestMa[r];
     if (random !== undefined) out[r] = linearSlice(scale, Math.min(hi, lo + random.nextUniform() * (hi - lo)));
-    else if (rule.kind === 'midpoint' || hi === lo) out[r] = linearSlice(scale, rule.kind === 'midpoint' ? 0.5 * (hi + lo) : lo);
-    else if (rule.kind === 'within') out[r] = linearContaining(scale, lo, hi);
-    else if (rule.kind === 'overlap') out[r] = linearLargestShare(scale, lo, hi, rule.fraction);
+    else if (rule.kind === 'mid-age' || hi === lo) out[r] = linearSlice(scale, rule.kind === 'mid-age' ? 0.5 * (hi + lo) : lo);
+    else if (rule.kind === 'whole-range') out[r] = linearContaining(scale, lo, hi);
+    else if (rule.kind === 'share') out[r] = linearLargestShare(scale, lo, hi, rule.fraction);
   }
 }
 
 export async function run(): Promise<void> {
   const stages = chartScale('stages');
-  const { maxMa, minMa } = makeRanges(stages.baseMa[0]);
+  const { oldestMa, youngestMa } = makeRanges(stages.baseMa[0]);
   const ours = createSliceAssignment(ROWS);
   const theirs = new Int32Array(ROWS);
   const rules: readonly AssignRule[] = [
-    { kind: 'midpoint' },
-    { kind: 'within' },
-    { kind: 'overlap', fraction: 0.5 },
-    { kind: 'random', seed: SEED },
+    { kind: 'mid-age' },
+    { kind: 'whole-range' },
+    { kind: 'share', fraction: 0.5 },
+    { kind: 'draw', seed: SEED },
   ];
   console.log(`binning: ${ROWS.toLocaleString('en')} seeded age ranges onto ${stages.names.length} chart stages`);
   for (const rule of rules) {
-    const name = rule.kind === 'overlap' ? `overlap:${rule.fraction}` : rule.kind;
-    const fast = time(`${name}: binary search (assignSlicesInto)`, () => assignSlicesInto(maxMa, minMa, stages, rule, ours), REPETITIONS, WARM_UP);
-    const slow = time(`${name}: reference, linear scan per row`, () => reference(maxMa, minMa, stages, rule, theirs), REPETITIONS, WARM_UP);
+    const name = rule.kind === 'share' ? `share:${rule.fraction}` : rule.kind;
+    const fast = time(`${name}: binary search (assignSlicesInto)`, () => assignSlicesInto(oldestMa, youngestMa, stages, rule, ours), REPETITIONS, WARM_UP);
+    const slow = time(`${name}: reference, linear scan per row`, () => reference(oldestMa, youngestMa, stages, rule, theirs), REPETITIONS, WARM_UP);
     report(fast, slow, 'a few tens of ms');
     let differ = 0;
     for (let r = 0; r < ROWS; r++) if (ours.slice[r] !== theirs[r]) differ++;

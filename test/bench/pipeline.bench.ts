@@ -44,10 +44,10 @@ export async function run(): Promise<void> {
     const ours = Array.from({ length: RUNS }, () => runProcess(cli));
     const reference = Array.from({ length: RUNS }, () => runProcess(['--import', 'tsx', 'test/bench/reference-pipeline.ts', table]));
     const oursMin = summarise('driftgrid coverage, 1M rows, stages, healpix:32', ours, 'target ≤ 3 s, ≤ 1024 MB');
-    const refMin = summarise('reference (row objects, string Sets, no MST but one)', reference, '');
+    const refMin = summarise('reference (row objects, string Sets, no spanning tree but one)', reference, '');
     console.log(`${''.padEnd(44)} ratio reference/ours (wall): ${(refMin / oursMin).toFixed(1)}x`);
     const figures = JSON.parse(reference[0].stdout) as { mstMs: number; mstPositions: number; slices: number[][] };
-    console.log(`${''.padEnd(44)} reference brute-force MST on ${figures.mstPositions} positions alone: ${(figures.mstMs / 1000).toFixed(2)} s`);
+    console.log(`${''.padEnd(44)} reference brute-force spanning tree on ${figures.mstPositions} positions alone: ${(figures.mstMs / 1000).toFixed(2)} s`);
     const slices = readFileSync(join(out, 'slices.csv'), 'utf8').trim().split('\n').slice(1).map((line) => line.split(','));
     const agree = slices.every((f, s) => [f[4], f[5], f[6], f[7]].map(Number).join() === figures.slices[s].join());
     console.log(`${''.padEnd(44)} per-slice occurrences, collections, taxa, cells agree with the reference: ${agree ? 'yes' : 'NO'}`);

@@ -25,17 +25,17 @@ const DEG = 180 / Math.PI;
 function presentDayTable(plates: readonly number[]): OccurrenceTable {
   const random = createSeededRandom(SEED);
   const lat = new Float64Array(ROWS), lon = new Float64Array(ROWS), plateId = new Int32Array(ROWS);
-  const maxMa = new Float64Array(ROWS), minMa = new Float64Array(ROWS);
+  const oldestMa = new Float64Array(ROWS), youngestMa = new Float64Array(ROWS);
   for (let i = 0; i < ROWS; i++) {
     lat[i] = Math.asin(2 * random.nextUniform() - 1) * DEG;
     lon[i] = random.nextUniform() * 360 - 180;
     plateId[i] = plates[Math.floor(random.nextUniform() * plates.length)];
-    maxMa[i] = random.nextUniform() * OLDEST_MA;
-    minMa[i] = Math.max(0, maxMa[i] - 5 * random.nextUniform());
+    oldestMa[i] = random.nextUniform() * OLDEST_MA;
+    youngestMa[i] = Math.max(0, oldestMa[i] - 5 * random.nextUniform());
   }
   const none = { codes: new Uint32Array(ROWS), values: ['x'] };
   return {
-    count: ROWS, line: Uint32Array.from({ length: ROWS }, (_, i) => i + 2), taxon: none, collection: none, maxMa, minMa,
+    count: ROWS, line: Uint32Array.from({ length: ROWS }, (_, i) => i + 2), taxon: none, collection: none, oldestMa, youngestMa,
     palaeoLat: new Float64Array(ROWS).fill(Number.NaN), palaeoLon: new Float64Array(ROWS).fill(Number.NaN), lat, lon, plateId,
   };
 }
@@ -80,7 +80,7 @@ export async function run(): Promise<void> {
   const model = demoModel();
   const table = presentDayTable(model.plateIds());
   const scale = equalBins(BIN_MYR, OLDEST_MA);
-  const assignment = assignSlices(table.maxMa, table.minMa, scale, { kind: 'midpoint' });
+  const assignment = assignSlices(table.oldestMa, table.youngestMa, scale, { kind: 'mid-age' });
   const refLat = new Float64Array(ROWS), refLon = new Float64Array(ROWS);
   const bySlice = time(`placement, ${scale.names.length} slices, at slice mid-age`, () => placeOccurrences(table, assignment, scale, model, { rotateAt: 'slice', preferModel: false }), REPETITIONS, WARM_UP);
   const slow = time('per-row reference', () => reference(model, table, assignment, scale, refLat, refLon), 3, 1);

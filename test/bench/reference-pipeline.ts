@@ -10,7 +10,7 @@ import { chartScale } from '../../src/time';
 const MST_POSITIONS = 5000;
 const R = 6371.0088;
 
-interface Row { taxon: string; max_ma: string; min_ma: string; palaeo_lat: string; palaeo_lon: string; collection: string }
+interface Row { taxon: string; oldest_ma: string; youngest_ma: string; palaeo_lat: string; palaeo_lon: string; collection: string }
 
 const started = performance.now();
 const file = process.argv[2];
@@ -21,7 +21,7 @@ const slices = Array.from(scale.names, () => ({ occurrences: 0, taxa: new Set<st
 for (const row of rows) {
   const lat = Number(row.palaeo_lat);
   const lon = Number(row.palaeo_lon);
-  const age = (Number(row.max_ma) + Number(row.min_ma)) / 2;
+  const age = (Number(row.oldest_ma) + Number(row.youngest_ma)) / 2;
   if (!row.taxon || !(Math.abs(lat) <= 90) || !(Math.abs(lon) <= 180)) continue;
   for (let s = 0; s < scale.names.length; s++) {
     if (age <= scale.baseMa[s] && (age > scale.topMa[s] || (age === 0 && scale.topMa[s] === 0))) {

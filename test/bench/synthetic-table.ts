@@ -23,7 +23,7 @@ export async function syntheticTable(rows: number, seed = 7, plates?: readonly n
   const centres = Array.from({ length: 400 }, () => [Math.asin(2 * u() - 1) * (180 / Math.PI), 360 * u() - 180]);
   const partial = `${path}.part`;
   const out = createWriteStream(partial);
-  out.write(plates === undefined ? 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection,environment\n' : 'taxon,max_ma,min_ma,lat,lon,plate_id,collection,environment\n');
+  out.write(plates === undefined ? 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,collection,environment\n' : 'taxon,oldest_ma,youngest_ma,lat,lon,plate_id,collection,environment\n');
   let written = 0;
   let collection = 0;
   while (written < rows) {
@@ -31,15 +31,15 @@ export async function syntheticTable(rows: number, seed = 7, plates?: readonly n
     const [clat, clon] = centres[Math.floor(u() * centres.length)];
     const lat = Math.max(-90, Math.min(90, clat + (u() - 0.5) * 16));
     const lon = ((clon + (u() - 0.5) * 24 + 540) % 360) - 180;
-    const maxMa = OLDEST_MA * u();
-    const minMa = Math.max(0, maxMa - 12 * u());
+    const oldestMa = OLDEST_MA * u();
+    const youngestMa = Math.max(0, oldestMa - 12 * u());
     const size = 1 + Math.floor(u() * 12);
     const env = u() < 0.7 ? 'marine' : '"terrestrial, fluvial"';
     const place = `${lat.toFixed(4)},${lon.toFixed(4)}${plates === undefined ? '' : `,${plates[Math.floor(u() * plates.length)]}`}`;
     let chunk = '';
     for (let k = 0; k < size && written < rows; k++, written++) {
       const taxon = `Genus${Math.floor(u() * u() * 20000)}`;
-      chunk += `${taxon},${maxMa.toFixed(2)},${minMa.toFixed(2)},${place},C${collection},${env}\n`;
+      chunk += `${taxon},${oldestMa.toFixed(2)},${youngestMa.toFixed(2)},${place},C${collection},${env}\n`;
     }
     if (!out.write(chunk)) await new Promise<void>((resolve) => out.once('drain', () => resolve()));
   }

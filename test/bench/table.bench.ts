@@ -37,7 +37,7 @@ async function writeTable(path: string): Promise<number> {
   const random = mulberry32(SEED);
   const out = createWriteStream(path);
   let bytes = 0;
-  let block = 'taxon,collection,max_ma,min_ma,palaeo_lat,palaeo_lon,plate_id\n';
+  let block = 'taxon,collection,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,plate_id\n';
   let left = 0;
   let shared = '';
   for (let i = 0; i < ROWS; i++) {

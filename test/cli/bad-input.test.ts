@@ -51,7 +51,7 @@ describe('options that cannot be used', () => {
     [['coverage', table, '--grid', 'hexes:3'], /--grid "hexes:3": expected healpix:NSIDE/],
     [['coverage', table, '--grid', 'healpix:33'], /power of two/],
     [['coverage', table, '--bins', 'equal:-5'], /equal/],
-    [['coverage', table, '--assign', 'overlap:1.5'], /overlap/],
+    [['coverage', table, '--assign', 'share:1.5'], /share/],
     [['coverage', table, '--seed', 'x'], /--seed "x": expected a whole number/],
     [['coverage', table, '--map', 'taxon'], /expected field=column/],
     [['coverage', table, '--colour', 'red'], /Unknown option '--colour'/],

@@ -72,7 +72,7 @@ describe('coverage with a rotation model on a small table', () => {
   // 0.3·t at age t, longitude 90° (rotation about the x axis by Rodrigues' formula, closed form).
   const poles = 'plate_id,age_ma,pole_lat,pole_lon,angle_deg,relative_to\n1,0,90,0,0,0\n1,100,0,0,30,0\n';
   const table = [
-    'taxon,max_ma,min_ma,lat,lon,plate_id',
+    'taxon,oldest_ma,youngest_ma,lat,lon,plate_id',
     'Alpha,40,20,0,90,1', // slice 50–0 Ma, mid-age 25: 7.5°N
     'Beta,170,160,0,90,1', // slice 200–150 Ma (equal bins reach the oldest age), mid-age 175: beyond 100 Ma
     'Gamma,40,20,0,90,999',
@@ -118,7 +118,7 @@ describe('coverage with a rotation model on a small table', () => {
     await run('recorded', '--rotate-at', 'occurrence', '--beyond-model', 'clamp', '--quiet');
     const session = JSON.parse(readFileSync(join(dir, 'recorded', 'session.json'), 'utf8'));
     const sha = execFileSync('sha256sum', [join(dir, 'poles.csv')], { encoding: 'utf8' }).split(' ')[0];
-    expect(session.formatVersion).toBe(2);
+    expect(session.formatVersion).toBe(3);
     expect(session.inputs.rotation).toEqual({ path: '../poles.csv', sha256: sha, bytes: Buffer.byteLength(poles) });
     expect(session.settings).toMatchObject({ rotateAt: 'occurrence', preferModel: false, beyondModel: 'clamp' });
     const again = await runCli('coverage', '--session', join(dir, 'recorded', 'session.json'), '--out', join(dir, 'again'), '--quiet');

@@ -18,7 +18,7 @@ describe('driftgrid coverage on a small hand-made table', () => {
   // Slice 20–10 Ma holds a triangle of sites (0°,0°), (0°,10°E), (10°N,0°); slice 10–0 Ma one
   // site twice.
   const table = [
-    'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection',
+    'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,collection',
     'Alpha,16,14,0,0,c1',
     'Beta,16,14,0,0,c1',
     'Alpha,18,12,0,10,c2',
@@ -55,7 +55,7 @@ describe('driftgrid coverage on a small hand-made table', () => {
     for (const [lat, lon] of [[0, 0], [0, 10], [10, 0]]) polygon.AddPoint(lat, lon);
     const area = Math.abs(polygon.Compute(false, true).area ?? NaN) / 1e6;
     expect(Number(older.hull_km2)).toBeCloseTo(area, 0);
-    // MST of the triangle: the two 10° sides meeting at (0°, 0°).
+    // Spanning tree of the triangle: the two 10° sides meeting at (0°, 0°).
     const side = (lat2: number, lon2: number) => (sphere.Inverse(0, 0, lat2, lon2).s12 ?? NaN) / 1000;
     expect(Number(older.mst_km)).toBeCloseTo(side(0, 10) + side(10, 0), 2);
   });
@@ -89,7 +89,7 @@ describe('driftgrid coverage on a small hand-made table', () => {
   it('records every setting and the SHA-256 of the input in session.json, and a rerun reproduces the CSVs byte for byte', async () => {
     const session = JSON.parse(readFileSync(join(out, 'session.json'), 'utf8'));
     expect(session.settings).toEqual({
-      bins: 'equal:10', assign: 'midpoint', seed: 1, grid: 'healpix:4', map: {}, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
+      bins: 'equal:10', assign: 'mid-age', seed: 1, grid: 'healpix:4', map: {}, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
     });
     const sha = execFileSync('sha256sum', [input], { encoding: 'utf8' }).split(' ')[0];
     expect(session.inputs.occurrences.sha256).toBe(sha);
@@ -98,6 +98,28 @@ describe('driftgrid coverage on a small hand-made table', () => {
     for (const name of ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv']) {
       expect(readFileSync(join(again, name), 'utf8')).toBe(readFileSync(join(out, name), 'utf8'));
     }
+  });
+
+  it('reruns a session file written before format 3, reading its former names, and records the present ones', async () => {
+    // The table's own column names would not be found by synonym, so the recorded map must be read.
+    const dir = tempDir('former');
+    const renamed = join(dir, 'renamed.csv');
+    writeFileSync(renamed, table.replace('taxon,oldest_ma,youngest_ma,', 'taxon,from,to,'));
+    const sha256 = execFileSync('sha256sum', [renamed], { encoding: 'utf8' }).split(' ')[0];
+    const former = {
+      format: 'driftgrid-session', formatVersion: 2, tool: { name: 'driftgrid', version: '0.1.0' },
+      inputs: { occurrences: { path: 'renamed.csv', sha256, bytes: readFileSync(renamed).length } },
+      settings: { bins: 'equal:10', assign: 'midpoint', seed: 1, grid: 'healpix:4', map: { max_ma: 'from', min_ma: 'to' }, rotateAt: 'slice', preferModel: false, beyondModel: 'reject' },
+      summary: {},
+    };
+    writeFileSync(join(dir, 'session.json'), JSON.stringify(former));
+    const run = await runCli('coverage', '--session', join(dir, 'session.json'), '--out', join(dir, 'again'), '--quiet');
+    expect(run.stderr).toBe('');
+    expect(run.status).toBe(0);
+    for (const name of ['slices.csv', 'cells.csv']) expect(readFileSync(join(dir, 'again', name), 'utf8')).toBe(readFileSync(join(out, name), 'utf8'));
+    const written = JSON.parse(readFileSync(join(dir, 'again', 'session.json'), 'utf8'));
+    expect(written.formatVersion).toBe(3);
+    expect(written.settings).toMatchObject({ assign: 'mid-age', map: { oldest_ma: 'from', youngest_ma: 'to' } });
   });
 
   it('refuses to rerun a session whose input has changed since', async () => {
@@ -116,7 +138,7 @@ describe('driftgrid coverage safeguards', () => {
   it('never writes over an input file, even when --out is its folder', async () => {
     const dir = tempDir('overwrite');
     const input = join(dir, 'slices.csv');
-    const text = 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nAlpha,10,5,1,1\n';
+    const text = 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon\nAlpha,10,5,1,1\n';
     writeFileSync(input, text);
     const run = await runCli('coverage', input, '--out', dir);
     expect(run.status).toBe(1);
@@ -127,7 +149,7 @@ describe('driftgrid coverage safeguards', () => {
   it('counts distinct positions as collections when the table names none, and says so', async () => {
     const dir = tempDir('nocollections');
     const input = join(dir, 't.csv');
-    writeFileSync(input, 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nA,10,5,1,1\nB,10,5,1,1\nC,10,5,2,2\n');
+    writeFileSync(input, 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon\nA,10,5,1,1\nB,10,5,1,1\nC,10,5,2,2\n');
     const run = await runCli('coverage', input, '--bins', 'equal:10', '--out', join(dir, 'r'));
     expect(run.stdout).toMatch(/names no collections: "collections" counts distinct positions/);
     expect(readCsv(join(dir, 'r', 'slices.csv'))[0].collections).toBe('2');
@@ -137,21 +159,21 @@ describe('driftgrid coverage safeguards', () => {
     const dir = tempDir('stretch');
     const input = join(dir, 't.csv');
     // 5000 typed for 500 on line 3 would be refused (older than the Earth); 4000 is a possible slip.
-    writeFileSync(input, 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon\nA,500,490,1,1\nB,4000,3990,1,1\nC,480,470,2,2\n');
+    writeFileSync(input, 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon\nA,500,490,1,1\nB,4000,3990,1,1\nC,480,470,2,2\n');
     const run = await runCli('coverage', input, '--bins', 'equal:10', '--out', join(dir, 'r'));
     expect(run.status).toBe(0);
-    expect(run.stdout).toMatch(/note: line 3 alone stretches the equal bins back to 4000 Ma: its max_ma is 4000 Ma, every other row's is 500 Ma or younger/);
+    expect(run.stdout).toMatch(/note: line 3 alone stretches the equal bins back to 4000 Ma: its oldest_ma is 4000 Ma, every other row's is 500 Ma or younger/);
     const stages = await runCli('coverage', input, '--bins', 'stages', '--out', join(dir, 's'));
     expect(stages.stdout).not.toMatch(/stretches/);
   });
 
-  it('gives the same results for --assign random with the same seed, and different ones with another', async () => {
-    const dir = tempDir('random');
+  it('gives the same results for --assign draw with the same seed, and different ones with another', async () => {
+    const dir = tempDir('draw');
     const input = join(dir, 't.csv');
     const rows = Array.from({ length: 200 }, (_, i) => `T${i % 17},${40 + (i % 7)},${(i * 7) % 30},${(i % 50) - 25},${(i * 13) % 300 - 150}`);
-    writeFileSync(input, ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon', ...rows].join('\n'));
+    writeFileSync(input, ['taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon', ...rows].join('\n'));
     const runWith = async (seed: string, name: string) => {
-      await runCli('coverage', input, '--bins', 'equal:5', '--assign', 'random', '--seed', seed, '--out', join(dir, name), '--quiet');
+      await runCli('coverage', input, '--bins', 'equal:5', '--assign', 'draw', '--seed', seed, '--out', join(dir, name), '--quiet');
       return readFileSync(join(dir, name, 'slices.csv'), 'utf8');
     };
     const first = await runWith('42', 'a');

@@ -8,7 +8,7 @@ describe('the coverage summary', () => {
   it('prints each kind of slice caution once, with how many slices and their names', async () => {
     // Slice 20–10 Ma: two places (few, and no hull). Slice 10–0 Ma: twelve places 30° apart
     // along latitude 10°N, whose hull covers about 41% of the sphere (wide).
-    const rows = ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,collection', 'Alpha,16,14,-5,20,c1', 'Beta,15,13,5,22,c2'];
+    const rows = ['taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,collection', 'Alpha,16,14,-5,20,c1', 'Beta,15,13,5,22,c2'];
     for (let k = 0; k < 12; k++) rows.push(`Gamma,6,4,10,${-180 + 30 * k},d${k}`);
     const dir = mkdtempSync(join(tmpdir(), 'driftgrid-cautions-'));
     writeFileSync(join(dir, 'cautions.csv'), rows.join('\n'));

@@ -6,7 +6,7 @@ import { PROBLEMS } from '../../assets/demo/problems';
 import { columns, demoCsv, demoText } from './demo-files';
 import { angleBetweenDeg, apply, poleMatrix, unit, type Mat3 } from '../rotation/rodrigues';
 
-const OCCURRENCE_HEADER = 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,environment,group';
+const OCCURRENCE_HEADER = 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,environment,group';
 const ENVIRONMENTS = new Set(['shallow marine', 'deep marine', 'reef', 'terrestrial', 'fluvial', 'lacustrine']);
 const DECIMAL = /^-?\d+(\.\d+)?$/;
 
@@ -16,8 +16,8 @@ function rowFault(f: readonly string[]): string | null {
   if (f.length !== 11) return `${f.length} fields`;
   if (!/^[A-Z][a-z]+$/.test(f[0])) return 'taxon';
   for (let i = 1; i <= 6; i++) if (!DECIMAL.test(f[i])) return OCCURRENCE_HEADER.split(',')[i];
-  const [maxMa, minMa, pLat, pLon, lat, lon] = f.slice(1, 7).map(Number);
-  if (!(minMa >= 66 && maxMa > minMa && maxMa <= 300)) return 'ages';
+  const [oldestMa, youngestMa, pLat, pLon, lat, lon] = f.slice(1, 7).map(Number);
+  if (!(youngestMa >= 66 && oldestMa > youngestMa && oldestMa <= 300)) return 'ages';
   if (Math.abs(pLat) > 90 || Math.abs(lat) > 90) return 'latitude';
   if (!(pLon > -180 && pLon <= 180 && lon > -180 && lon <= 180)) return 'longitude';
   if (!/^\d+$/.test(f[7]) || f[8] === '' || !ENVIRONMENTS.has(f[9]) || !/^[A-Z][a-z]+$/.test(f[10])) return 'plate, collection, environment or group';
@@ -26,7 +26,7 @@ function rowFault(f: readonly string[]): string | null {
 
 const occ = demoCsv('occurrences.csv');
 const oc = columns(occ.header);
-const mid = (r: readonly string[]) => (Number(r[oc.max_ma]) + Number(r[oc.min_ma])) / 2;
+const mid = (r: readonly string[]) => (Number(r[oc.oldest_ma]) + Number(r[oc.youngest_ma])) / 2;
 
 describe('occurrences.csv', () => {
   it('has the documented header and about 50,000 clean rows', () => {
@@ -41,7 +41,7 @@ describe('occurrences.csv', () => {
     const sites = new Map<string, { key: string; taxa: Set<string> }>();
     const faults: string[] = [];
     for (const r of occ.rows) {
-      const key = [oc.max_ma, oc.min_ma, oc.palaeo_lat, oc.palaeo_lon, oc.lat, oc.lon, oc.plate_id, oc.environment].map((i) => r[i]).join(',');
+      const key = [oc.oldest_ma, oc.youngest_ma, oc.palaeo_lat, oc.palaeo_lon, oc.lat, oc.lon, oc.plate_id, oc.environment].map((i) => r[i]).join(',');
       const c = sites.get(r[oc.collection]) ?? { key, taxa: new Set<string>() };
       if (c.key !== key) faults.push(`${r[oc.collection]}: ${key} differs from ${c.key}`);
       if (c.taxa.has(r[oc.taxon])) faults.push(`${r[oc.collection]}: ${r[oc.taxon]} listed twice`);
@@ -53,7 +53,7 @@ describe('occurrences.csv', () => {
   });
 
   it('has age ranges of varied width, from under 2 Myr to over 10 Myr', () => {
-    const widths = occ.rows.map((r) => Number(r[oc.max_ma]) - Number(r[oc.min_ma]));
+    const widths = occ.rows.map((r) => Number(r[oc.oldest_ma]) - Number(r[oc.youngest_ma]));
     expect(widths.filter((w) => w < 2).length / widths.length).toBeGreaterThan(0.1);
     expect(widths.filter((w) => w > 10).length / widths.length).toBeGreaterThan(0.05);
   });
@@ -92,7 +92,7 @@ describe('poles.csv', () => {
   const pc = columns(header);
 
   it('has the DESIGN.md header and a row every 10 Myr from 0 to 300 Ma per plate, identity at 0 Ma', () => {
-    expect(header.join(',')).toBe('plate_id,age_ma,pole_lat,pole_lon,angle_deg,relative_to');
+    expect(header.join(',')).toBe('plate_id,relative_to,age_ma,pole_lat,pole_lon,angle_deg');
     const plates = new Set(rows.map((r) => r[pc.plate_id]));
     for (const p of plates) {
       const own = rows.filter((r) => r[pc.plate_id] === p);
@@ -141,7 +141,7 @@ describe('indicators.csv', () => {
   const ic = columns(header);
 
   it('has the documented header and a few thousand rows of the six kinds', () => {
-    expect(header.join(',')).toBe('kind,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id');
+    expect(header.join(',')).toBe('kind,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id');
     expect(rows.length).toBe(3000);
     expect(new Set(rows.map((r) => r[ic.kind]))).toEqual(new Set(['coal', 'evaporite', 'glacial', 'bauxite', 'laterite', 'reef']));
   });

@@ -56,7 +56,7 @@ function worstReconstructionError(file: string): { worst: number; rows: number }
   const cache = new Map<string, Mat3>();
   let worst = 0;
   for (const r of rows) {
-    const age = (Number(r[c.max_ma]) + Number(r[c.min_ma])) / 2;
+    const age = (Number(r[c.oldest_ma]) + Number(r[c.youngest_ma])) / 2;
     const key = `${r[c.plate_id]}@${age}`;
     let m = cache.get(key);
     if (m === undefined) cache.set(key, (m = totalMatrix(Number(r[c.plate_id]), age)));

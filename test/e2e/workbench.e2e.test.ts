@@ -110,7 +110,7 @@ describe('the workbench with the demo scenario', () => {
     await page.waitForTimeout(300);
     await waitReady(page);
     expect(await field(page, 'name')).toBe(inField);
-    await assign.selectOption('midpoint');
+    await assign.selectOption('mid-age');
     await waitReady(page);
     await assign.blur();
     await page.keyboard.press('End');
@@ -122,7 +122,7 @@ describe('the workbench with the demo scenario', () => {
     const { page } = opened;
     const before = await field(page, 'name');
     await page.locator('dg-frame-controls select').filter({ has: page.locator('option[value="16"]') }).selectOption('16');
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('grid=healpix%3A16');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('grid=healpix%3A16');
     await waitReady(page);
     expect(await field(page, 'name')).toBe(before);
     const { rows } = await cliSlices('--bins', 'stages', '--grid', 'healpix:16');
@@ -140,13 +140,13 @@ describe('the workbench with the demo scenario', () => {
     await page.locator('dg-export-menu button[data-export="session.json"]').click();
     const sessionPath = await (await sessionDownload).path();
     const session = JSON.parse(readFileSync(sessionPath, 'utf8'));
-    expect(session.settings).toMatchObject({ bins: 'stages', grid: 'healpix:16', assign: 'midpoint' });
+    expect(session.settings).toMatchObject({ bins: 'stages', grid: 'healpix:16', assign: 'mid-age' });
 
     await page.locator('dg-frame-controls select#bins').selectOption('epochs');
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=epochs');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('bins=epochs');
     await waitReady(page);
     await page.locator('dg-import-panel input[name="session"]').setInputFiles(sessionPath);
-    await expect.poll(() => page.evaluate(() => location.hash)).toContain('bins=stages');
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('bins=stages');
     await waitReady(page);
     expect(await page.locator('dg-frame-controls select#bins').inputValue()).toBe('stages');
   });
@@ -162,6 +162,26 @@ describe('the workbench with the demo scenario', () => {
     const download = page.waitForEvent('download');
     await page.locator('dg-export-menu button[data-export="curves.csv"]').click();
     expect(readFileSync(await (await download).path(), 'utf8')).toBe(readFileSync(join(out, 'curves.csv'), 'utf8'));
+  });
+
+  test('opens a session file written before format 3 and exports one with the present names', async () => {
+    const { page } = opened;
+    const former = 'test/e2e/fixtures/session-former-names.json';
+    const cli = await runCli('coverage', '--session', former, '--out', mkdtempSync(join(tmpdir(), 'driftgrid-former-')), '--quiet');
+    expect(cli.stderr).toBe('');
+    expect(cli.status).toBe(0);
+    await waitReady(page);
+    await page.locator('dg-import-panel input[name="session"]').setInputFiles(former);
+    await expect.poll(() => page.evaluate(() => location.hash), { timeout: 30_000 }).toContain('assign=share%3A0.5');
+    await waitReady(page);
+    expect(await page.locator('dg-frame-controls select#assign').inputValue()).toBe('share');
+    const sessionDownload = page.waitForEvent('download');
+    await page.locator('dg-export-menu button[data-export="session.json"]').click();
+    const session = JSON.parse(readFileSync(await (await sessionDownload).path(), 'utf8'));
+    expect(session.formatVersion).toBe(3);
+    // The page keeps the column map of the table it has loaded; the former names are gone.
+    expect(session.settings).toMatchObject({ assign: 'share:0.5', grid: 'healpix:16' });
+    expect(JSON.stringify(session.settings)).not.toMatch(/max_ma|min_ma|overlap/);
   });
 
   test('shows the equal-area map and the curves with drawn content (screenshots kept)', async () => {
@@ -200,7 +220,7 @@ describe('importing a table', () => {
       expect(await page.locator('dg-rejects-panel [data-field="rejected-count"]').textContent()).toBe('1');
       const rejected = page.locator('dg-rejects-panel tbody tr');
       expect(await rejected.count()).toBe(1);
-      expect(await rejected.textContent()).toMatch(/6.*max_ma.*Gammora,abc/s);
+      expect(await rejected.textContent()).toMatch(/6.*oldest_ma.*Gammora,abc/s);
       // The demo's poles, polygons and indicators do not stay with the user's table.
       expect(await page.locator('dg-import-panel').evaluate((el) => el.shadowRoot?.textContent ?? '')).not.toContain('(demo)');
       expect(await field(page, 'name')).toBe('Cenomanian');

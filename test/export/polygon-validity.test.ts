@@ -3,7 +3,7 @@ import { geoArea } from 'd3-geo';
 import { booleanValid, polygon } from '@turf/turf';
 import type { FeatureCollection, Polygon, Position } from 'geojson';
 import { cellsGeoJson } from '../../src/export/cells-geojson';
-import { geometryText } from '../../src/export/reconstructed-geojson';
+import { geometryText } from '../../src/export/rotated-geojson';
 import type { CellTallies } from '../../src/footprint/cell-tallies';
 import { parseGridName } from '../../src/grid';
 import { plateFeaturesOf, reconstructFeaturesAt } from '../../src/placement';
@@ -55,11 +55,11 @@ describe.each(['healpix:1', 'healpix:2', 'healpix:4', 'healpix:8', 'healpix:16',
   },
 );
 
-/** The reconstructed geometry as the reconstruct command writes it, read back. */
+/** The reconstructed geometry as the rotate command writes it, read back. */
 const writtenReconstruction = (g: Written): Written => JSON.parse(geometryText(g)) as Written;
 
 describe('reconstructed base polygons as written', () => {
-  it('are valid for the demo land at every stage slice, as `reconstruct --bins stages` writes them', () => {
+  it('are valid for the demo land at every stage slice, as `rotate --bins stages` writes them', () => {
     const [header, ...lines] = demoText('poles.csv').trimEnd().split('\n');
     const model = createRotationModel(poleTableFromRecords(header.split(','), lines.map((l, i) => ({ line: i + 2, fields: l.split(',') })), 'poles.csv'));
     const { features } = plateFeaturesOf(JSON.parse(demoText('land.geojson')), 'land.geojson');

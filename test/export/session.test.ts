@@ -6,7 +6,7 @@ const session: Session = {
   formatVersion: SESSION_FORMAT_VERSION,
   tool: { name: 'driftgrid', version: '0.1.0' },
   inputs: { occurrences: { path: '../occ.csv', sha256: 'a'.repeat(64), bytes: 12 } },
-  settings: { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: { taxon: 'genus' } },
+  settings: { bins: 'stages', assign: 'mid-age', seed: 1, grid: 'healpix:32', map: { taxon: 'genus' } },
   summary: { rowsRead: 3 },
 };
 

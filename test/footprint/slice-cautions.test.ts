@@ -11,7 +11,7 @@ const slice = (positions: number, hullKm2: number, hullNote?: string) => ({ occu
 const codes = (s: ReturnType<typeof slice>) => sliceCautions(s).map((c) => c.code);
 
 describe('slice cautions', () => {
-  it('calls fewer than ten distinct places few, because one place then moves the tree length by more than a ninth', () => {
+  it('calls fewer than ten distinct places few, because one place then moves the spanning-tree length by more than a ninth', () => {
     // A spanning tree over n places has n − 1 edges: one place is on average 1/(n − 1) of its length.
     expect(1 / (FEW_PLACES_BELOW - 2)).toBeGreaterThan(1 / 9);
     expect(1 / (FEW_PLACES_BELOW - 1)).toBeLessThanOrEqual(1 / 9);

@@ -8,12 +8,12 @@ import { POLES, modelOf, tableOf, type Row } from './rows';
 // from the placement rules (README, "Placement") and the slice assignment (DESIGN.md).
 const SCALE = equalBins(25, 100);
 const ROWS: readonly Row[] = [
-  { maxMa: 10, minMa: 10, palaeo: [10, 20] }, // placed from the table
-  { maxMa: 150, minMa: 150, palaeo: [10, 20] }, // older than every bin: ageOutside
-  { maxMa: 10, minMa: 10, present: [0, 0] }, // no plate id: noPlateId
-  { maxMa: 10, minMa: 10, present: [0, 0], plateId: 9 }, // plate 9 is not in POLES: plateNotInModel
-  { maxMa: 80, minMa: 80, present: [0, 0], plateId: 2 }, // plate 2 reaches back to 50 Ma: beyondModel
-  { maxMa: 30, minMa: 20, palaeo: [10, 20] }, // spans the 25 Ma boundary: spansSlices under "within"
+  { oldestMa: 10, youngestMa: 10, palaeo: [10, 20] }, // placed from the table
+  { oldestMa: 150, youngestMa: 150, palaeo: [10, 20] }, // older than every bin: ageOutside
+  { oldestMa: 10, youngestMa: 10, present: [0, 0] }, // no plate id: noPlateId
+  { oldestMa: 10, youngestMa: 10, present: [0, 0], plateId: 9 }, // plate 9 is not in POLES: plateNotInModel
+  { oldestMa: 80, youngestMa: 80, present: [0, 0], plateId: 2 }, // plate 2 reaches back to 50 Ma: beyondModel
+  { oldestMa: 30, youngestMa: 20, palaeo: [10, 20] }, // spans the 25 Ma boundary: spansSlices under "whole-range"
 ];
 
 describe('the exclusion table', () => {
@@ -26,7 +26,7 @@ describe('the exclusion table', () => {
   it('collects the rows of both stages with their named reason, in row order, and takes unplaced rows out of their slice', () => {
     const table = tableOf(ROWS);
     const model = modelOf(POLES);
-    const assignment = assignSlices(table.maxMa, table.minMa, SCALE, { kind: 'within' });
+    const assignment = assignSlices(table.oldestMa, table.youngestMa, SCALE, { kind: 'whole-range' });
     const placement = placeOccurrences(table, assignment, SCALE, model, { rotateAt: 'slice', preferModel: false });
     const sliceOfRow = Int32Array.from(assignment.slice);
     const exclusions = collectExclusions(assignment, placement, sliceOfRow);

@@ -15,21 +15,21 @@ import { POLES, modelOf, tableOf, type Row } from './rows';
 // y axis (0°N 90°E) then moves to latitude = the angle, longitude 90°.
 
 const scale = equalBins(50, 100); // slice 0: 100–50 Ma (mid-age 75), slice 1: 50–0 Ma (mid-age 25)
-const MIDPOINT: AssignRule = { kind: 'midpoint' };
+const MIDPOINT: AssignRule = { kind: 'mid-age' };
 
 const ROWS: Row[] = [
-  /* 0 */ { maxMa: 70, minMa: 50, palaeo: [10, 20], present: [0, 90], plateId: 1 },
-  /* 1 */ { maxMa: 30, minMa: 20, palaeo: [5, 5] },
-  /* 2 */ { maxMa: 40, minMa: 20, present: [0, 90], plateId: 1 },
-  /* 3 */ { maxMa: 30, minMa: 20, present: [10, 10] },
-  /* 4 */ { maxMa: 30, minMa: 20, present: [10, 10], plateId: 9 },
-  /* 5 */ { maxMa: 90, minMa: 60, present: [0, 0], plateId: 2 },
-  /* 6 */ { maxMa: 200, minMa: 150, present: [0, 90], plateId: 1 },
+  /* 0 */ { oldestMa: 70, youngestMa: 50, palaeo: [10, 20], present: [0, 90], plateId: 1 },
+  /* 1 */ { oldestMa: 30, youngestMa: 20, palaeo: [5, 5] },
+  /* 2 */ { oldestMa: 40, youngestMa: 20, present: [0, 90], plateId: 1 },
+  /* 3 */ { oldestMa: 30, youngestMa: 20, present: [10, 10] },
+  /* 4 */ { oldestMa: 30, youngestMa: 20, present: [10, 10], plateId: 9 },
+  /* 5 */ { oldestMa: 90, youngestMa: 60, present: [0, 0], plateId: 2 },
+  /* 6 */ { oldestMa: 200, youngestMa: 150, present: [0, 90], plateId: 1 },
 ];
 
 function place(rows: readonly Row[], model: RotationModel | undefined, settings: PlacementSettings = DEFAULT_PLACEMENT, rule = MIDPOINT) {
   const table = tableOf(rows);
-  return placeOccurrences(table, assignSlices(table.maxMa, table.minMa, scale, rule), scale, model, settings);
+  return placeOccurrences(table, assignSlices(table.oldestMa, table.youngestMa, scale, rule), scale, model, settings);
 }
 
 const latLonOf = (v: readonly number[]) => [Math.asin(v[2]) * (180 / Math.PI), Math.atan2(v[1], v[0]) * (180 / Math.PI)];
@@ -51,11 +51,11 @@ describe('placing rows on the palaeoglobe', () => {
 
   it("rotates to each row's own age (the assignment's age) with rotate-at occurrence", () => {
     const p = place(ROWS, model, { rotateAt: 'occurrence', preferModel: false });
-    expect(p.ageMa[2]).toBe(30); // midpoint of 40–20 Ma
+    expect(p.ageMa[2]).toBe(30); // mid-age of 40–20 Ma
     expect(p.lat[2]).toBeCloseTo(9, 12);
-    const drawn = place(ROWS, model, { rotateAt: 'occurrence', preferModel: false }, { kind: 'random', seed: 5 });
+    const drawn = place(ROWS, model, { rotateAt: 'occurrence', preferModel: false }, { kind: 'draw', seed: 5 });
     const table = tableOf(ROWS);
-    const assignment = assignSlices(table.maxMa, table.minMa, scale, { kind: 'random', seed: 5 });
+    const assignment = assignSlices(table.oldestMa, table.youngestMa, scale, { kind: 'draw', seed: 5 });
     expect(drawn.ageMa[2]).toBe(assignment.age[2]);
     expect(drawn.lat[2]).toBeCloseTo(0.3 * assignment.age[2], 10);
   });
@@ -68,7 +68,7 @@ describe('placing rows on the palaeoglobe', () => {
   });
 
   it('does not fall back to the table palaeocoordinates when the preferred model cannot place a row', () => {
-    const p = place([{ maxMa: 30, minMa: 20, palaeo: [1, 2], present: [0, 0], plateId: 9 }], model, { rotateAt: 'slice', preferModel: true });
+    const p = place([{ oldestMa: 30, youngestMa: 20, palaeo: [1, 2], present: [0, 0], plateId: 9 }], model, { rotateAt: 'slice', preferModel: true });
     expect(p.status[0]).toBe(PLACEMENT_STATUS.plateNotInModel);
     expect(Number.isNaN(p.lat[0])).toBe(true);
   });
@@ -118,7 +118,7 @@ describe('placing rows on the palaeoglobe', () => {
   it('moves all rows of one slice and plate rigidly: great-circle distances between them are unchanged (property)', () => {
     const point = fc.tuple(fc.double({ min: -89, max: 89, noNaN: true }), fc.double({ min: -180, max: 180, noNaN: true }));
     fc.assert(fc.property(fc.array(point, { minLength: 2, maxLength: 20 }), fc.constantFrom(1, 2), (points, plateId) => {
-      const rows = points.map((present) => ({ maxMa: 40, minMa: 10, present, plateId }));
+      const rows = points.map((present) => ({ oldestMa: 40, youngestMa: 10, present, plateId }));
       const p = place(rows, model);
       for (let i = 1; i < rows.length; i++) {
         const before = angleBetweenDeg(unit(...points[0]), unit(...points[i]));
@@ -130,7 +130,7 @@ describe('placing rows on the palaeoglobe', () => {
 
   it('places every row exactly once: counts add up and unplaced rows have no position (property)', () => {
     const row = fc.record({
-      maxMa: fc.double({ min: 0, max: 120, noNaN: true }),
+      oldestMa: fc.double({ min: 0, max: 120, noNaN: true }),
       span: fc.double({ min: 0, max: 30, noNaN: true }),
       palaeo: fc.option(fc.tuple(fc.integer({ min: -90, max: 90 }), fc.integer({ min: -180, max: 180 }))),
       present: fc.option(fc.tuple(fc.integer({ min: -90, max: 90 }), fc.integer({ min: -180, max: 180 }))),
@@ -138,7 +138,7 @@ describe('placing rows on the palaeoglobe', () => {
     });
     fc.assert(fc.property(fc.array(row, { minLength: 1, maxLength: 30 }), fc.boolean(), (drawn, preferModel) => {
       const rows: Row[] = drawn.map((r) => ({
-        maxMa: r.maxMa, minMa: Math.max(0, r.maxMa - r.span), palaeo: r.palaeo ?? (r.present === null ? [0, 0] : undefined),
+        oldestMa: r.oldestMa, youngestMa: Math.max(0, r.oldestMa - r.span), palaeo: r.palaeo ?? (r.present === null ? [0, 0] : undefined),
         present: r.present ?? undefined, plateId: r.plateId ?? undefined,
       }));
       const table: OccurrenceTable = tableOf(rows);

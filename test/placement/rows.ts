@@ -3,8 +3,8 @@ import { createRotationModel, poleTableFromRecords, type BeyondModel, type Rotat
 import { NO_PLATE, type OccurrenceTable } from '../../src/table';
 
 export interface Row {
-  readonly maxMa: number;
-  readonly minMa: number;
+  readonly oldestMa: number;
+  readonly youngestMa: number;
   readonly palaeo?: readonly [number, number];
   readonly present?: readonly [number, number];
   readonly plateId?: number;
@@ -19,8 +19,8 @@ export function tableOf(rows: readonly Row[]): OccurrenceTable {
     line: Uint32Array.from(rows, (_, k) => k + 2),
     taxon: none,
     collection: { codes: new Uint32Array(n).fill(0xffffffff), values: [] },
-    maxMa: Float64Array.from(rows, (r) => r.maxMa),
-    minMa: Float64Array.from(rows, (r) => r.minMa),
+    oldestMa: Float64Array.from(rows, (r) => r.oldestMa),
+    youngestMa: Float64Array.from(rows, (r) => r.youngestMa),
     palaeoLat: Float64Array.from(rows, (r) => r.palaeo?.[0] ?? Number.NaN),
     palaeoLon: Float64Array.from(rows, (r) => r.palaeo?.[1] ?? Number.NaN),
     lat: Float64Array.from(rows, (r) => r.present?.[0] ?? Number.NaN),

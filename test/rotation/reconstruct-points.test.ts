@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  BEYOND_MODEL, POLE_TABLE_COLUMNS, ROTATION_STATUS, createRotationModel, poleTableFromRecords,
+  BEYOND_MODEL, ROTATION_STATUS, createRotationModel, poleTableFromRecords,
   reconstructPointsInto, type BeyondModel, type PresentDayPoints, type ReconstructedPoints, type RotationModel,
 } from '../../src/rotation';
 import { createSeededRandom } from '../../src/time/seeded-random';
@@ -8,12 +8,13 @@ import { columns, demoCsv, demoText } from '../demo/demo-files';
 // Independent reference: Rodrigues rotation matrices (./rodrigues), composed and interpolated
 // along the SO(3) geodesic without quaternions.
 import { angleBetweenDeg, apply, geodesicBetween, matMul, poleMatrix, unit, type Mat3 } from './rodrigues';
+import { TEST_POLE_HEADER } from './pole-rows';
 
 const LINES = ['101,0,90,0,0,0', '101,100,20,30,40,0', '101,200,-10,60,65,0', '601,0,90,0,0,101', '601,150,45,-120,-30,101'];
 
 function modelOf(lines: readonly string[], beyond: BeyondModel = BEYOND_MODEL.reject): RotationModel {
   const records = lines.map((l, i) => ({ line: i + 2, fields: l.split(',') }));
-  return createRotationModel(poleTableFromRecords([...POLE_TABLE_COLUMNS], records, 'poles.csv'), { beyond });
+  return createRotationModel(poleTableFromRecords(TEST_POLE_HEADER, records, 'poles.csv'), { beyond });
 }
 
 /** Total rotation matrix of plate 101 or 601 at an age, from the rows of LINES, by matrices only. */
@@ -117,7 +118,7 @@ describe('the demo scenario', () => {
     const occ = demoCsv('occurrences.csv'), c = columns(occ.header);
     const n = occ.rows.length;
     const col = (name: string) => Float64Array.from(occ.rows, (r) => Number(r[c[name]]));
-    const ages = Float64Array.from(occ.rows, (r) => (Number(r[c.max_ma]) + Number(r[c.min_ma])) / 2);
+    const ages = Float64Array.from(occ.rows, (r) => (Number(r[c.oldest_ma]) + Number(r[c.youngest_ma])) / 2);
     const out = reconstructed(model, { lat: col('lat'), lon: col('lon'), plateId: Int32Array.from(occ.rows, (r) => Number(r[c.plate_id])) }, ages);
     const palaeoLat = col('palaeo_lat'), palaeoLon = col('palaeo_lon');
     let worst = 0;

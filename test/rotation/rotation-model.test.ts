@@ -3,19 +3,20 @@ import fc from 'fast-check';
 import geodesic from 'geographiclib-geodesic';
 import { InputError } from '../../src/problems';
 import {
-  BEYOND_MODEL, POLE_TABLE_COLUMNS, ROTATION_STATUS, RotationLookupError,
+  BEYOND_MODEL, ROTATION_STATUS, RotationLookupError,
   createQuaternion, createRotationModel, multiplyQuaternionsInto, poleFromQuaternion, poleTableFromRecords,
   rotateVectorInto, type BeyondModel, type RotationModel,
 } from '../../src/rotation';
 // Independent reference: rotation matrices by Rodrigues' formula, and the SO(3) geodesic that
 // slerp must follow (see ./rodrigues for sources). Nothing there uses quaternions.
 import { angleBetweenDeg, apply, axisAngleOfMatrix, geodesicBetween, matMul, poleMatrix, transpose, unit } from './rodrigues';
+import { TEST_POLE_HEADER } from './pole-rows';
 
 const DEG = 180 / Math.PI;
 
 function modelOf(lines: readonly string[], beyond: BeyondModel = BEYOND_MODEL.reject): RotationModel {
   const records = lines.map((l, i) => ({ line: i + 2, fields: l.split(',') }));
-  return createRotationModel(poleTableFromRecords([...POLE_TABLE_COLUMNS], records, 'poles.csv'), { beyond });
+  return createRotationModel(poleTableFromRecords(TEST_POLE_HEADER, records, 'poles.csv'), { beyond });
 }
 
 function problemsOf(lines: readonly string[]): string[] {

@@ -10,7 +10,7 @@ import { TOOL_VERSION } from '../../src/version';
 // Line 3 is older than the chart's oldest stage (538.8 Ma, ICS 2023/09): no slice holds it.
 // Its quoted name runs over two lines, so line 5 has a blank taxon: refused on reading. Lines 2 and 6
 // are placed from their palaeocoordinates.
-const TABLE = 'taxon,palaeo_lat,palaeo_lon,max_ma,min_ma\r\nAlpha,10,20,70,68\r\n"Beta\r\nprime",11,21,900,899\r\n,12,22,70,68\r\nGamma,-30,40,100,95\r\n';
+const TABLE = 'taxon,palaeo_lat,palaeo_lon,oldest_ma,youngest_ma\r\nAlpha,10,20,70,68\r\n"Beta\r\nprime",11,21,900,899\r\n,12,22,70,68\r\nGamma,-30,40,100,95\r\n';
 const text: TextSource = async (push) => push(TABLE);
 const INPUTS = { occurrences: { path: 'o.csv', sha256: 'a'.repeat(64), bytes: TABLE.length }, bins: { path: 'b.csv', sha256: 'b'.repeat(64), bytes: 9 } };
 
@@ -31,7 +31,7 @@ describe('a run', () => {
     expect(session.tool).toEqual({ name: 'driftgrid', version: TOOL_VERSION });
     expect(session.inputs).toEqual({ occurrences: INPUTS.occurrences }); // chart bins: the bins file is not an input
     expect(session.settings).toEqual({
-      bins: 'stages', assign: 'midpoint', seed: 1, grid: 'bands:10', map: { taxon: 'taxon' }, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
+      bins: 'stages', assign: 'mid-age', seed: 1, grid: 'bands:10', map: { taxon: 'taxon' }, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
     });
     expect(session.summary).toMatchObject({ rowsRead: 4, accepted: 3, rejectedOnReading: 1, excludedFromSlices: 1, placedFromTable: 2 });
   });

@@ -9,7 +9,7 @@ import {
 
 const AS_SETTINGS = { naming: 'setting' } as const;
 const AS_OPTIONS = { naming: 'option' } as const;
-const REQUIRED = { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: {} };
+const REQUIRED = { bins: 'stages', assign: 'mid-age', seed: 1, grid: 'healpix:32', map: {} };
 
 /** The message parseRunSettings throws, or '' when it accepts. */
 function refusal(raw: object, source: Parameters<typeof parseRunSettings>[1]): string {
@@ -26,21 +26,21 @@ describe('run settings', () => {
   it('take the command line defaults when nothing is given', () => {
     expect(parseRunSettings({}, AS_OPTIONS)).toEqual(DEFAULT_RUN_SETTINGS);
     expect(settingsText(DEFAULT_RUN_SETTINGS)).toEqual({
-      bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: {}, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
+      bins: 'stages', assign: 'mid-age', seed: 1, grid: 'healpix:32', map: {}, rotateAt: 'slice', preferModel: false, beyondModel: 'reject',
     });
   });
 
   it('read the text of options and session files into tagged choices', () => {
     const settings = parseRunSettings(
-      { bins: ' Equal:2.5 ', assign: 'overlap:0.75', seed: '42', grid: 'bands:10', map: ['taxon=genus', 'lat=y'], rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp' },
+      { bins: ' Equal:2.5 ', assign: 'share:0.75', seed: '42', grid: 'bands:10', map: ['taxon=genus', 'lat=y'], rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp' },
       AS_OPTIONS,
     );
     expect(settings).toEqual({
-      bins: { kind: 'equal', widthMyr: 2.5 }, assign: { kind: 'overlap', fraction: 0.75 }, seed: 42, grid: { kind: 'bands', degrees: 10 },
+      bins: { kind: 'equal', widthMyr: 2.5 }, assign: { kind: 'share', fraction: 0.75 }, seed: 42, grid: { kind: 'bands', degrees: 10 },
       map: { taxon: 'genus', lat: 'y' }, rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp',
     });
-    expect(parseRunSettings({ ...REQUIRED, bins: 'file', assign: 'random', seed: 4294967295 }, AS_SETTINGS)).toMatchObject({
-      bins: { kind: 'file' }, assign: { kind: 'random' }, seed: 4294967295,
+    expect(parseRunSettings({ ...REQUIRED, bins: 'file', assign: 'draw', seed: 4294967295 }, AS_SETTINGS)).toMatchObject({
+      bins: { kind: 'file' }, assign: { kind: 'draw' }, seed: 4294967295,
     });
   });
 
@@ -52,7 +52,7 @@ describe('run settings', () => {
         for (const bins of [{ kind: 'equal', widthMyr: width }, { kind: 'chart', rank: 'epochs' }, { kind: 'file' }] as const) {
           expect(binsChoiceOf(binsText(bins))).toEqual(bins);
         }
-        const assign = { kind: 'overlap', fraction } as const;
+        const assign = { kind: 'share', fraction } as const;
         expect(assignChoiceOf(assignText(assign))).toEqual(assign);
         for (const grid of [{ kind: 'healpix', nside: 2 ** level }, { kind: 'bands', degrees }] as const) {
           expect(gridChoiceOf(gridText(grid))).toEqual(grid);
@@ -64,8 +64,8 @@ describe('run settings', () => {
   it.each([
     ['bins', 'epochz', 'periods, epochs, stages, equal:N (N-Myr bins, e.g. equal:10) or file (an own bins table)'],
     ['bins', 'equal:-5', 'a bin width in Myr greater than 0, as in equal:10'],
-    ['assign', 'first', 'midpoint, within, overlap:F (0 < F <= 1) or random'],
-    ['assign', 'overlap:1.5', 'a share of the age range greater than 0 and at most 1, as in overlap:0.5'],
+    ['assign', 'first', 'mid-age, whole-range, share:F (0 < F <= 1) or draw'],
+    ['assign', 'share:1.5', 'a share of the age range greater than 0 and at most 1, as in share:0.5'],
     ['seed', -1, 'a whole number from 0 to 4294967295'],
     ['seed', 2.5, 'a whole number from 0 to 4294967295'],
     ['seed', 4294967296, 'a whole number from 0 to 4294967295'],
@@ -106,11 +106,32 @@ describe('run settings', () => {
   });
 
   it('ask a session file for the settings every format has written', () => {
-    expect(refusal({ assign: 'midpoint', seed: 1, map: {} }, { name: 's.json', naming: 'setting' })).toBe([
+    expect(refusal({ assign: 'mid-age', seed: 1, map: {} }, { name: 's.json', naming: 'setting' })).toBe([
       's.json, settings.bins "": expected a value; a session file gives bins, assign, seed, grid, map',
       's.json, settings.grid "": expected a value; a session file gives bins, assign, seed, grid, map',
     ].join('\n'));
     expect(refusal({ ...REQUIRED, map: { taxon: 3 } }, AS_SETTINGS)).toBe('settings.map "3": expected the header of the column for taxon');
+  });
+
+  it('read the names session files used before format 3 as the present ones, and write the present ones', () => {
+    const former = { bins: 'stages', seed: 7, grid: 'healpix:32', map: { max_ma: 'from', MIN_MA: 'to', taxon: 'genus' } };
+    const read = (assign: string) => parseRunSettings({ ...former, assign }, AS_SETTINGS);
+    expect(read('midpoint').assign).toEqual({ kind: 'mid-age' });
+    expect(read(' Within ').assign).toEqual({ kind: 'whole-range' });
+    expect(read('overlap:0.25').assign).toEqual({ kind: 'share', fraction: 0.25 });
+    expect(read('random').assign).toEqual({ kind: 'draw' });
+    expect(read('midpoint').map).toEqual({ oldest_ma: 'from', youngest_ma: 'to', taxon: 'genus' });
+    expect(settingsText(read('overlap:0.25'))).toMatchObject({ assign: 'share:0.25', map: { oldest_ma: 'from', youngest_ma: 'to', taxon: 'genus' } });
+    // A bad former value is shown as written; a field given by both names is refused.
+    expect(refusal({ ...former, assign: 'overlap:2' }, AS_SETTINGS)).toBe('settings.assign "overlap:2": expected a share of the age range greater than 0 and at most 1, as in share:0.5');
+    expect(refusal({ ...REQUIRED, map: { max_ma: 'a', oldest_ma: 'b' } }, AS_SETTINGS))
+      .toBe('settings.map "b": expected each field named once; oldest_ma is already mapped to a');
+  });
+
+  it('take only the present names on the command line', () => {
+    expect(refusal({ assign: 'midpoint' }, AS_OPTIONS)).toBe('--assign "midpoint": expected mid-age, whole-range, share:F (0 < F <= 1) or draw');
+    expect(refusal({ assign: 'overlap:0.5' }, AS_OPTIONS)).toBe('--assign "overlap:0.5": expected mid-age, whole-range, share:F (0 < F <= 1) or draw');
+    expect(parseRunSettings({ map: ['max_ma=from'] }, AS_OPTIONS).map).toEqual({ max_ma: 'from' }); // refused by the column mapper, naming the fields
   });
 
   it('read a session file the same way, whoever opens it', () => {

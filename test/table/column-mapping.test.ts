@@ -32,8 +32,11 @@ describe('the synonym table', () => {
     expect(matchSynonym('Paleo Lat')?.field).toBe('palaeo_lat');
     expect(matchSynonym('paleolatitude')?.field).toBe('palaeo_lat');
     expect(matchSynonym('PALAEO-LONGITUDE')?.field).toBe('palaeo_lon');
-    expect(matchSynonym(' Max.Age ')?.field).toBe('max_ma');
-    expect(matchSynonym('age_min')?.field).toBe('min_ma');
+    expect(matchSynonym(' Max.Age ')?.field).toBe('oldest_ma');
+    expect(matchSynonym('age_min')?.field).toBe('youngest_ma');
+    // The names our own tables used before oldest_ma/youngest_ma still load.
+    expect(matchSynonym('max_ma')).toEqual({ field: 'oldest_ma', ownName: false });
+    expect(matchSynonym('MIN_MA')).toEqual({ field: 'youngest_ma', ownName: false });
     expect(matchSynonym('lng')?.field).toBe('lon');
     expect(matchSynonym('Plate ID')?.field).toBe('plate_id');
     expect(matchSynonym('latitude (deg)')).toBeUndefined();
@@ -43,7 +46,7 @@ describe('the synonym table', () => {
 describe('mapColumns', () => {
   it('maps a header by synonyms and lists the columns it does not use', () => {
     const m = mapColumns(['Taxon Name', 'notes', 'Max Age', 'min_age', 'Latitude', 'Lng', 'plate', 'Locality']);
-    expect(m.index).toMatchObject({ taxon: 0, max_ma: 2, min_ma: 3, lat: 4, lon: 5, plate_id: 6, collection: 7, interval: -1, palaeo_lat: -1 });
+    expect(m.index).toMatchObject({ taxon: 0, oldest_ma: 2, youngest_ma: 3, lat: 4, lon: 5, plate_id: 6, collection: 7, interval: -1, palaeo_lat: -1 });
     expect(m.unused).toEqual([1]);
     expect(m.how.taxon).toBe('synonym');
   });
@@ -62,7 +65,7 @@ describe('mapColumns', () => {
   });
 
   it('refuses a duplicated column name that matters, naming both positions', () => {
-    expect(failure(['taxon', 'max_ma', 'min_ma', 'lat', 'lon', 'Lat'])).toMatch(
+    expect(failure(['taxon', 'oldest_ma', 'youngest_ma', 'lat', 'lon', 'Lat'])).toMatch(
       /^line 1, header "Lat": expected one column for lat \(duplicate column name: column 4 \("lat"\) and column 6 \("Lat"\) both give lat; rename or remove one\)$/,
     );
   });
@@ -80,23 +83,23 @@ describe('mapColumns', () => {
   it('lists the columns found and the names accepted for everything missing, all at once', () => {
     const message = failure(['name', 'age', 'x', 'y']);
     expect(message).toMatch(/no usable header/);
-    expect(message).toMatch(/^line 1, header "name, age, x, y": expected a first line naming the columns, separated by commas, tabs or semicolons \(fields: taxon, max_ma/);
+    expect(message).toMatch(/^line 1, header "name, age, x, y": expected a first line naming the columns, separated by commas, tabs or semicolons \(fields: taxon, oldest_ma/);
     const missing = failure(['species', 'lat']);
     expect(missing.split('\n')).toEqual([
-      expect.stringMatching(/^line 1, header "species, lat": expected age columns: max_ma and min_ma, or interval \(no age columns; accepted names for max_ma: max_ma, max_age/),
+      expect.stringMatching(/^line 1, header "species, lat": expected age columns: oldest_ma and youngest_ma, or interval \(no age columns; accepted names for oldest_ma: oldest_ma, oldest_age, max_ma, max_age/),
       expect.stringMatching(/^line 1, header "species, lat": expected a lon column beside the lat column \(accepted names for lon: lon, lng, long, longitude/),
     ]);
   });
 
   it('requires a taxon, an age source and a position source', () => {
-    expect(failure(['max_ma', 'min_ma', 'lat', 'lon'])).toMatch(/^line 1, header "max_ma, min_ma, lat, lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name/);
-    expect(failure(['taxon', 'max_ma', 'lat', 'lon'])).toMatch(/^line 1, header "taxon, max_ma, lat, lon": expected a min_ma column beside the max_ma column/);
+    expect(failure(['oldest_ma', 'youngest_ma', 'lat', 'lon'])).toMatch(/^line 1, header "oldest_ma, youngest_ma, lat, lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name/);
+    expect(failure(['taxon', 'oldest_ma', 'lat', 'lon'])).toMatch(/^line 1, header "taxon, oldest_ma, lat, lon": expected a youngest_ma column beside the oldest_ma column/);
     expect(failure(['taxon', 'interval', 'collection'])).toMatch(/^line 1, header "taxon, interval, collection": expected position columns: palaeo_lat and palaeo_lon, or lat and lon/);
     expect(mapColumns(['taxon', 'interval', 'palaeo_lat', 'palaeo_lon']).index.interval).toBe(1);
   });
 
   it('explains explicit pairs that do not fit', () => {
-    expect(failure(['a', 'b'], { taxa: 'a' })).toMatch(/^mapping "taxa=a": expected a field before "=", one of taxon, max_ma, .* \("taxa" is not a field\)$/);
+    expect(failure(['a', 'b'], { taxa: 'a' })).toMatch(/^mapping "taxa=a": expected a field before "=", one of taxon, oldest_ma, .* \("taxa" is not a field\)$/);
     expect(failure(['a', 'b'], { taxon: 'c' })).toMatch(/^mapping "taxon=c": expected a column name after "=" that the header has \(no column is named "c"; columns found: "a", "b"\)$/);
     expect(failure(['a', 'b'], { taxon: 'a', group: 'a' })).toMatch(/^mapping "group=a": expected a column no other field is mapped to \(column 1 \("a"\) is already mapped to another field\)$/);
     expect(failure(['a', 'a'], { taxon: 'a' })).toMatch(/^mapping "taxon=a": expected a column name after "=" that one column has \(column 1 \("a"\) and column 2 \("a"\) both match; rename one\)$/);

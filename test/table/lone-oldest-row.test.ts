@@ -3,8 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { LONE_STRETCH_SHARE, loneOldestRow } from '../../src/table/index';
 import { tableOf as rowsTable } from '../placement/rows';
 
-/** A table of rows with these max_ma (min_ma 0, one place), line k + 2 for row k. */
-const tableOf = (maxMa: number[]) => rowsTable(maxMa.map((age) => ({ maxMa: age, minMa: 0, palaeo: [0, 0] as const })));
+/** A table of rows with these oldest_ma (youngest_ma 0, one place), line k + 2 for row k. */
+const tableOf = (oldestMa: number[]) => rowsTable(oldestMa.map((age) => ({ oldestMa: age, youngestMa: 0, palaeo: [0, 0] as const })));
 
 describe('the row that alone stretches equal bins', () => {
   it('names the row 5000 Ma old among rows of at most 500 Ma, with its line and the next age', () => {

@@ -11,7 +11,7 @@ function read(text: string | string[], options: Partial<OccurrenceReaderOptions>
   return reader.end();
 }
 
-const HEADER = 'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,interval\n';
+const HEADER = 'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon,lat,lon,plate_id,collection,interval\n';
 
 /** The single reject of a one-row table. */
 function rejectOf(row: string, header = HEADER): { line: number; field: string; reason: string; original: string } {
@@ -31,8 +31,8 @@ describe('accepted rows', () => {
     expect(table.count).toBe(2);
     expect([...table.line]).toEqual([2, 3]);
     expect(table.taxon.values).toEqual(['Alpha beta', 'Gamma\ndelta']);
-    expect([...table.maxMa]).toEqual([100.5, 100]);
-    expect([...table.minMa]).toEqual([94, 0.5]);
+    expect([...table.oldestMa]).toEqual([100.5, 100]);
+    expect([...table.youngestMa]).toEqual([94, 0.5]);
     expect([...table.palaeoLat]).toEqual([12.5, NaN]);
     expect([...table.palaeoLon]).toEqual([-40.25, NaN]);
     expect([...table.lat]).toEqual([NaN, 45]);
@@ -44,23 +44,23 @@ describe('accepted rows', () => {
   });
 
   it('accepts a present-day pair without a plate id and leaves the placing to the analysis', () => {
-    const { table } = read('taxon,max_ma,min_ma,lat,lon,plate_id\nAlpha,10,5,1,2,\n');
+    const { table } = read('taxon,oldest_ma,youngest_ma,lat,lon,plate_id\nAlpha,10,5,1,2,\n');
     expect(table.count).toBe(1);
     expect(table.plateId[0]).toBe(NO_PLATE);
   });
 
   it('removes only the whitespace around text values and keeps case and inner spaces', () => {
-    const { table } = read('taxon,max_ma,min_ma,lat,lon,group\n  Alpha  beta \t,10,5,1,2, Clade X \nalpha beta,10,5,1,2,\n');
+    const { table } = read('taxon,oldest_ma,youngest_ma,lat,lon,group\n  Alpha  beta \t,10,5,1,2, Clade X \nalpha beta,10,5,1,2,\n');
     expect(table.taxon.values).toEqual(['Alpha  beta', 'alpha beta']);
     expect(table.group?.values).toEqual(['Clade X']);
     expect([...(table.group?.codes ?? [])]).toEqual([0, ABSENT_CODE]);
   });
 
-  it('takes ages from max_ma/min_ma when given and from the interval when both are blank', () => {
+  it('takes ages from oldest_ma/youngest_ma when given and from the interval when both are blank', () => {
     const { table, rejects } = read(HEADER + 'A,130,125,1,2,,,,,Aptian\nB,,,1,2,,,,, Albian \n');
     expect(rejects).toEqual([]);
-    expect([...table.maxMa]).toEqual([130, 113.0]);
-    expect([...table.minMa]).toEqual([125, 100.5]);
+    expect([...table.oldestMa]).toEqual([130, 113.0]);
+    expect([...table.youngestMa]).toEqual([125, 100.5]);
   });
 
   it('passes blank lines over and counts them apart from the rows', () => {
@@ -76,10 +76,10 @@ describe('accepted rows', () => {
   });
 
   it('uses an explicit mapping and reports which column fed each field', () => {
-    const result = read('name;y;x;from;to\nA;1;2;10;5\n', { mapping: { taxon: 'name', palaeo_lat: 'y', palaeo_lon: 'x', max_ma: 'from', min_ma: 'to' } });
+    const result = read('name;y;x;from;to\nA;1;2;10;5\n', { mapping: { taxon: 'name', palaeo_lat: 'y', palaeo_lon: 'x', oldest_ma: 'from', youngest_ma: 'to' } });
     expect(result.table.count).toBe(1);
     expect(result.delimiter).toBe(';');
-    expect(result.columns.index.max_ma).toBe(3);
+    expect(result.columns.index.oldest_ma).toBe(3);
   });
 });
 
@@ -91,15 +91,15 @@ describe('rejected rows', () => {
       ['A,10,5,91,2,,,,,', 'palaeo_lat', /^palaeo_lat "91" is out of range; expected decimal degrees from -90 to 90$/],
       ['A,10,5,,,1,-180.5,,,', 'lon', /^lon "-180.5" is out of range; expected decimal degrees from -180 to 180$/],
       ['A,10,5,,,1,181,,,', 'lon', /from -180 to 180 \(longitudes from 0 to 360 must be converted first\)$/],
-      ['A,5,10,1,2,,,,,', 'max_ma', /^max_ma "5" is less than min_ma "10"; max_ma is the older end/],
-      ['A,10,-0.5,1,2,,,,,', 'min_ma', /^min_ma "-0.5" is negative; expected an age in Ma before present, 0 or more$/],
+      ['A,5,10,1,2,,,,,', 'oldest_ma', /^oldest_ma "5" is less than youngest_ma "10"; oldest_ma is the older end/],
+      ['A,10,-0.5,1,2,,,,,', 'youngest_ma', /^youngest_ma "-0.5" is negative; expected an age in Ma before present, 0 or more$/],
       // The Earth's age bound: 4567 Ma (Connelly et al. 2012, Science 338:651, from memory).
-      ['A,5000,500,1,2,,,,,', 'max_ma', /^max_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/],
-      ['A,4567.5,4567.2,1,2,,,,,', 'max_ma', /^max_ma "4567.5" is older than the Earth/],
-      ['A,6000,5000,1,2,,,,,', 'max_ma', /^max_ma "6000" is older than the Earth/],
+      ['A,5000,500,1,2,,,,,', 'oldest_ma', /^oldest_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/],
+      ['A,4567.5,4567.2,1,2,,,,,', 'oldest_ma', /^oldest_ma "4567.5" is older than the Earth/],
+      ['A,6000,5000,1,2,,,,,', 'oldest_ma', /^oldest_ma "6000" is older than the Earth/],
       ['A,,,1,2,,,,,Cretaceous Park', 'interval', /^interval "Cretaceous Park" is not a known interval; expected a name from the built-in time chart$/],
-      ['A,,,1,2,,,,,', 'interval', /^no age: max_ma, min_ma and interval are blank; expected max_ma and min_ma in Ma, or an interval name$/],
-      ['A,10,,1,2,,,,,Aptian', 'min_ma', /^min_ma is blank but max_ma is "10"; give both, or leave both blank to use the interval$/],
+      ['A,,,1,2,,,,,', 'interval', /^no age: oldest_ma, youngest_ma and interval are blank; expected oldest_ma and youngest_ma in Ma, or an interval name$/],
+      ['A,10,,1,2,,,,,Aptian', 'youngest_ma', /^youngest_ma is blank but oldest_ma is "10"; give both, or leave both blank to use the interval$/],
       ['A,10,5,,,,,701,,', 'palaeo_lat', /^no position: palaeo_lat, palaeo_lon, lat and lon are all blank; expected palaeo_lat and palaeo_lon, or lat and lon$/],
       ['A,10,5,1,,,,,,', 'palaeo_lon', /^palaeo_lon is blank but palaeo_lat is "1"; give both palaeo_lat and palaeo_lon, or neither$/],
       ['A,10,5,"12,5",2,,,,,', 'palaeo_lat', /^palaeo_lat "12,5" uses a comma; a decimal point is expected/],

@@ -26,7 +26,7 @@ describe('sniffBytes', () => {
   });
 
   it('recognises UTF-16 without a byte-order mark by its NUL bytes on one side', () => {
-    const text = 'taxon,max_ma,min_ma\nAlpha,1,0\n';
+    const text = 'taxon,oldest_ma,youngest_ma\nAlpha,1,0\n';
     expect(sniffBytes(utf16(text, true))?.value).toBe('UTF-16 text');
     expect(sniffBytes(utf16(text, false))?.value).toBe('UTF-16 text');
   });

@@ -47,21 +47,21 @@ const BAD_FIXTURES: Readonly<Record<string, Expectation>> = {
   'utf16be-bom.csv': { error: /^encoding "UTF-16 text": expected UTF-8 text; save the file as UTF-8$/ },
   'utf16le-no-bom.csv': { error: /^encoding "UTF-16 text": expected UTF-8 text; save the file as UTF-8$/ },
   'invalid-utf8.csv': { error: /^line 3, encoding "invalid UTF-8 at byte (\d+) \(counting from 0\)": expected UTF-8 text; save the file as UTF-8$/ },
-  'pipe-delimited.csv': { error: /^line 1, header "taxon\|max_ma\|min_ma\|palaeo_lat\|palaeo_lon": expected a first line naming the columns, separated by commas, tabs or semicolons .*; no usable header/ },
+  'pipe-delimited.csv': { error: /^line 1, header "taxon\|oldest_ma\|youngest_ma\|palaeo_lat\|palaeo_lon": expected a first line naming the columns, separated by commas, tabs or semicolons .*; no usable header/ },
   'unbalanced-quote.csv': { error: /^line 3, row ""Gamma delta,.*": expected a closing quote for the quoted field that starts on this line, which is never closed/ },
   'duplicate-header.csv': { error: /^line 1, header "lat": expected one column for lat \(duplicate column name: column 4 \("lat"\) and column 6 \("lat"\) both give lat; rename or remove one\)/ },
   'ambiguous-columns.csv': { error: /^line 1, header "genus, species": expected one column for taxon \(column 1 \("genus"\) and column 2 \("species"\) both look like taxon; choose one with the mapping taxon=<column name>\)/ },
-  'missing-taxon-column.csv': { error: /^line 1, header "name, max_ma, min_ma, palaeo_lat, palaeo_lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name, / },
-  'missing-age-columns.csv': { error: /^line 1, header "taxon, palaeo_lat, palaeo_lon": expected age columns: max_ma and min_ma, or interval \(no age columns; accepted names for max_ma: max_ma, / },
-  'no-position-columns.csv': { error: /^line 1, header "taxon, max_ma, min_ma, collection": expected position columns: palaeo_lat and palaeo_lon, or lat and lon \(\+ plate_id\) \(no position columns; accepted names for palaeo_lat: / },
-  'half-position-pair.csv': { error: /^line 1, header "taxon, max_ma, min_ma, palaeo_lat, lat, lon": expected a palaeo_lon column beside the palaeo_lat column \(accepted names for palaeo_lon: palaeo_lon, / },
+  'missing-taxon-column.csv': { error: /^line 1, header "name, oldest_ma, youngest_ma, palaeo_lat, palaeo_lon": expected a taxon column \(no taxon column; accepted names for taxon: taxon, taxon_name, / },
+  'missing-age-columns.csv': { error: /^line 1, header "taxon, palaeo_lat, palaeo_lon": expected age columns: oldest_ma and youngest_ma, or interval \(no age columns; accepted names for oldest_ma: oldest_ma, / },
+  'no-position-columns.csv': { error: /^line 1, header "taxon, oldest_ma, youngest_ma, collection": expected position columns: palaeo_lat and palaeo_lon, or lat and lon \(\+ plate_id\) \(no position columns; accepted names for palaeo_lat: / },
+  'half-position-pair.csv': { error: /^line 1, header "taxon, oldest_ma, youngest_ma, palaeo_lat, lat, lon": expected a palaeo_lon column beside the palaeo_lat column \(accepted names for palaeo_lon: palaeo_lon, / },
   'lat-91.csv': { accepted: 1, rejects: [[3, 'palaeo_lat', /^palaeo_lat "91" is out of range; expected decimal degrees from -90 to 90$/]] },
   'lon-abc.csv': { accepted: 1, rejects: [[3, 'palaeo_lon', /^palaeo_lon "abc" is not a number; expected decimal degrees from -180 to 180$/]] },
   'lon-181.csv': { accepted: 1, rejects: [[3, 'palaeo_lon', /^palaeo_lon "181" is out of range; expected decimal degrees from -180 to 180 \(longitudes from 0 to 360/]] },
-  'ages-reversed.csv': { accepted: 1, rejects: [[3, 'max_ma', /^max_ma "90" is less than min_ma "100"; max_ma is the older end of the age range/]] },
-  'negative-age.csv': { accepted: 1, rejects: [[3, 'min_ma', /^min_ma "-3" is negative; expected an age in Ma before present, 0 or more$/]] },
-  'older-than-earth.csv': { accepted: 2, rejects: [[3, 'max_ma', /^max_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/]] },
-  'half-age-value.csv': { accepted: 1, rejects: [[3, 'min_ma', /^min_ma is blank but max_ma is "12"; give both$/]] },
+  'ages-reversed.csv': { accepted: 1, rejects: [[3, 'oldest_ma', /^oldest_ma "90" is less than youngest_ma "100"; oldest_ma is the older end of the age range/]] },
+  'negative-age.csv': { accepted: 1, rejects: [[3, 'youngest_ma', /^youngest_ma "-3" is negative; expected an age in Ma before present, 0 or more$/]] },
+  'older-than-earth.csv': { accepted: 2, rejects: [[3, 'oldest_ma', /^oldest_ma "5000" is older than the Earth; expected an age no older than the Earth \(4567 Ma\)$/]] },
+  'half-age-value.csv': { accepted: 1, rejects: [[3, 'youngest_ma', /^youngest_ma is blank but oldest_ma is "12"; give both$/]] },
   'unknown-interval.csv': { accepted: 1, rejects: [[3, 'interval', /^interval "Jurassic Park" is not a known interval; expected a name from the built-in time chart$/]] },
   'missing-taxon-value.csv': { accepted: 1, rejects: [[3, 'taxon', /^taxon is blank; every row needs a taxon name$/]] },
   'blank-position.csv': { accepted: 1, rejects: [[3, 'palaeo_lat', /^no position: palaeo_lat, palaeo_lon, lat and lon are all blank/]] },
@@ -72,12 +72,12 @@ const BAD_FIXTURES: Readonly<Record<string, Expectation>> = {
     accepted: 1,
     rejects: [
       [3, 'palaeo_lat', /^palaeo_lat "NaN" is not a finite number/],
-      [4, 'max_ma', /^max_ma "Infinity" is not a finite number/],
+      [4, 'oldest_ma', /^oldest_ma "Infinity" is not a finite number/],
       [5, 'palaeo_lon', /^palaeo_lon "-Infinity" is not a finite number/],
     ],
   },
   'plate-id-not-integer.csv': { accepted: 1, rejects: [[3, 'plate_id', /^plate_id "12.5" is not a plate id; expected a whole number from 0 to 2147483647$/]] },
-  'hex-number.csv': { accepted: 1, rejects: [[3, 'max_ma', /^max_ma "0x1A" is not a number; expected an age in Ma before present, 0 or more$/]] },
+  'hex-number.csv': { accepted: 1, rejects: [[3, 'oldest_ma', /^oldest_ma "0x1A" is not a number; expected an age in Ma before present, 0 or more$/]] },
   'text-after-quote.csv': { accepted: 1, rejects: [[3, 'row', /^malformed quoting: field 1 has text after its closing quote/]] },
 };
 
@@ -132,7 +132,7 @@ describe('large bad files, generated at run time', () => {
 
   it('names the line of a quote left open across a large file', async () => {
     const path = join(dir, 'open-quote.csv');
-    await writeFile(path, 'taxon,max_ma,min_ma,lat,lon\nA,1,0,1,1\n"B,1,0,1,1\n' + 'C,1,0,1,1\n'.repeat(200_000));
+    await writeFile(path, 'taxon,oldest_ma,youngest_ma,lat,lon\nA,1,0,1,1\n"B,1,0,1,1\n' + 'C,1,0,1,1\n'.repeat(200_000));
     expect((await failure(path)).message).toMatch(/^line 3, row ""B,1,0,1,1…": expected a closing quote \("\) within 1048576 characters: a quoted field starts on this line and is still open/);
   });
 });
@@ -154,21 +154,21 @@ describe('good fixtures', () => {
     expect(delimiter).toBe('\t');
     expect([...table.lat]).toEqual([45.5, -10, 45.5]);
     expect([...table.plateId]).toEqual([101, NO_PLATE, 101]);
-    expect([...table.maxMa]).toEqual([150, 100, 150]);
-    expect([...table.minMa]).toEqual([145, 0.5, 145]);
+    expect([...table.oldestMa]).toEqual([150, 100, 150]);
+    expect([...table.youngestMa]).toEqual([145, 0.5, 145]);
     expect([...table.taxon.codes]).toEqual([0, 1, 0]);
     expect([...(table.environment?.codes ?? [])]).toEqual([0, ABSENT_CODE, 0]);
   });
 
   it('reads interval names, and numbers where a row gives both', async () => {
     const { table } = await readFile(join(GOOD, 'intervals.csv'));
-    expect([...table.maxMa]).toEqual([121.4, 113.0, 130]);
-    expect([...table.minMa]).toEqual([113.0, 100.5, 125]);
+    expect([...table.oldestMa]).toEqual([121.4, 113.0, 130]);
+    expect([...table.youngestMa]).toEqual([113.0, 100.5, 125]);
   });
 
   it('recognises headers written with synonyms, case and separators', async () => {
     const { table, columns } = await readFile(join(GOOD, 'synonym-headers.csv'));
-    expect(columns.index).toMatchObject({ taxon: 0, max_ma: 1, min_ma: 2, palaeo_lat: 3, palaeo_lon: 4, collection: 5, group: 6 });
+    expect(columns.index).toMatchObject({ taxon: 0, oldest_ma: 1, youngest_ma: 2, palaeo_lat: 3, palaeo_lon: 4, collection: 5, group: 6 });
     expect(table.count).toBe(2);
     expect(table.group?.values).toEqual(['Beta group']);
   });

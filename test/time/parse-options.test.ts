@@ -32,20 +32,21 @@ describe('the bins option', () => {
 
 describe('the rule option', () => {
   it('reads every rule, ignoring case and surrounding whitespace', () => {
-    expect(parseAssignRule('midpoint', 0)).toEqual({ kind: 'midpoint' });
-    expect(parseAssignRule(' Within ', 0)).toEqual({ kind: 'within' });
-    expect(parseAssignRule('overlap:0.5', 0)).toEqual({ kind: 'overlap', fraction: 0.5 });
-    expect(parseAssignRule('overlap:1', 0)).toEqual({ kind: 'overlap', fraction: 1 });
-    expect(parseAssignRule('random', 42)).toEqual({ kind: 'random', seed: 42 });
+    expect(parseAssignRule('mid-age', 0)).toEqual({ kind: 'mid-age' });
+    expect(parseAssignRule(' Whole-Range ', 0)).toEqual({ kind: 'whole-range' });
+    expect(parseAssignRule('share:0.5', 0)).toEqual({ kind: 'share', fraction: 0.5 });
+    expect(parseAssignRule('share:1', 0)).toEqual({ kind: 'share', fraction: 1 });
+    expect(parseAssignRule('draw', 42)).toEqual({ kind: 'draw', seed: 42 });
   });
 
   it.each([
-    ['overlap:0', 0, 'overlap "0": expected a share of the age range greater than 0 and at most 1, as in overlap:0.5'],
-    ['overlap:1.5', 0, 'overlap "1.5": expected a share'],
-    ['overlap:half', 0, 'overlap "half": expected a share'],
-    ['random', -3, 'seed "-3": expected an integer from 0 to 4294967295'],
-    ['random', 2.5, 'seed "2.5": expected an integer from 0 to 4294967295'],
-    ['nearest', 0, 'rule "nearest": expected midpoint, within, overlap:F (0 < F <= 1) or random'],
+    ['share:0', 0, 'share "0": expected a share of the age range greater than 0 and at most 1, as in share:0.5'],
+    ['share:1.5', 0, 'share "1.5": expected a share'],
+    ['share:half', 0, 'share "half": expected a share'],
+    ['draw', -3, 'seed "-3": expected an integer from 0 to 4294967295'],
+    ['draw', 2.5, 'seed "2.5": expected an integer from 0 to 4294967295'],
+    ['nearest', 0, 'rule "nearest": expected mid-age, whole-range, share:F (0 < F <= 1) or draw'],
+    ['midpoint', 0, 'rule "midpoint": expected mid-age, whole-range, share:F (0 < F <= 1) or draw'],
   ])('refuses "%s" (seed %d) with a clear message', (text, seed, message) => {
     expect(() => parseAssignRule(text, seed)).toThrow(message);
   });

@@ -38,7 +38,7 @@ describe('bins from a table', () => {
 
   it('allows gaps, and an age in a gap belongs to no slice', () => {
     const scale = binsFromRecords(HEADER, rows(['a', '30', '20'], ['b', '15', '5']), 'bins');
-    const out = assignSlices(Float64Array.of(17), Float64Array.of(17), scale, { kind: 'midpoint' });
+    const out = assignSlices(Float64Array.of(17), Float64Array.of(17), scale, { kind: 'mid-age' });
     expect(out.slice[0]).toBe(-1);
     expect(out.reason[0]).toBe(EXCLUSION_CODE.ageOutside);
   });

@@ -83,7 +83,7 @@ describe('curves text', () => {
   it('reads out a slice with units, and the reason when there is no hull', () => {
     const slices = fiveSlices();
     expect(curvesReadout(slices[2], visibleSeries(['occurrences', 'hullKm2', 'latSpan']), false)).toBe('E3, 30–20 Ma: occurrences 40; hull area none (one place); latitude span 0.0°');
-    expect(curvesReadout(slices[0], visibleSeries(['hullKm2', 'mstKm']), false)).toBe('E1, 50–40 Ma: hull area 1 km²; MST length 100 km');
+    expect(curvesReadout(slices[0], visibleSeries(['hullKm2', 'mstKm']), false)).toBe('E1, 50–40 Ma: hull area 1 km²; spanning-tree length 100 km');
     // A slice named by its range (equal bins) is not named twice.
     expect(curvesReadout({ ...slices[0], name: '50–40 Ma' }, visibleSeries(['taxa']), false)).toBe('50–40 Ma: taxa 3');
   });
@@ -176,7 +176,7 @@ describe('figures', () => {
     const figure = curvesFigure(v, ['occurrences', 'hullKm2'], false, WIDTH);
     expect(figure.width).toBe(WIDTH);
     expect(figure.text).toMatch(/^<svg xmlns="http:\/\/www.w3.org\/2000\/svg" width="568" height="\d+"/);
-    for (const text of ['<title>Footprint through time</title>', 'bins stages · assign midpoint · grid healpix:32 · 5 slices', '>occurrences</text>', '>hull area (km²)</text>', '>Age (Ma)</text>']) {
+    for (const text of ['<title>Footprint through time</title>', 'bins stages · assign mid-age · grid healpix:32 · 5 slices', '>occurrences</text>', '>hull area (km²)</text>', '>Age (Ma)</text>']) {
       expect(figure.text).toContain(text);
     }
     expect(figure.text).not.toContain('>taxa</text>');

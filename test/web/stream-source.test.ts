@@ -10,7 +10,7 @@ const collect = async (blob: Blob): Promise<string> => {
 
 describe('reading a picked file in the worker', () => {
   it('passes UTF-8 text through unchanged, multi-byte characters included', async () => {
-    const text = 'taxon,max_ma\nÆgirocrinus,100\n日本,90\n';
+    const text = 'taxon,oldest_ma\nÆgirocrinus,100\n日本,90\n';
     expect(await collect(new Blob([text]))).toBe(text);
   });
 
@@ -36,11 +36,11 @@ describe('reading a picked file in the worker', () => {
 
 describe('the import preview', () => {
   it('shows the header, first rows and the columns found by their names', async () => {
-    const csv = 'Species,max_ma,min_ma,paleolat,paleolng,extra\n"<img src=x onerror=alert(1)>",100,90,10,20,z\n';
+    const csv = 'Species,oldest_ma,youngest_ma,paleolat,paleolng,extra\n"<img src=x onerror=alert(1)>",100,90,10,20,z\n';
     const preview = await tablePreview(new Blob([csv]), 'hostile.csv');
-    expect(preview.header).toEqual(['Species', 'max_ma', 'min_ma', 'paleolat', 'paleolng', 'extra']);
+    expect(preview.header).toEqual(['Species', 'oldest_ma', 'youngest_ma', 'paleolat', 'paleolng', 'extra']);
     expect(preview.rows[0][0]).toBe('<img src=x onerror=alert(1)>');
-    expect(preview.detected).toMatchObject({ max_ma: 'max_ma', min_ma: 'min_ma', palaeo_lat: 'paleolat', palaeo_lon: 'paleolng' });
+    expect(preview.detected).toMatchObject({ oldest_ma: 'oldest_ma', youngest_ma: 'youngest_ma', palaeo_lat: 'paleolat', palaeo_lon: 'paleolng' });
   });
 
   it('says why the detected columns are not enough', async () => {

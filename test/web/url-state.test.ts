@@ -7,7 +7,7 @@ import type { SliceMetrics } from '../../src/analysis';
 
 const state: UrlState = {
   settings: {
-    ...DEFAULT_RUN_SETTINGS, bins: { kind: 'equal', widthMyr: 5 }, assign: { kind: 'random' }, seed: 42, grid: { kind: 'bands', degrees: 10 },
+    ...DEFAULT_RUN_SETTINGS, bins: { kind: 'equal', widthMyr: 5 }, assign: { kind: 'draw' }, seed: 42, grid: { kind: 'bands', degrees: 10 },
     rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp',
   },
   measure: 'taxa',
@@ -35,14 +35,14 @@ describe('the page address', () => {
 
   it('writes the settings as their canonical text, as session files do', () => {
     const hash = new URLSearchParams(encodeUrlState(state));
-    expect([hash.get('bins'), hash.get('assign'), hash.get('seed'), hash.get('grid')]).toEqual(['equal:5', 'random', '42', 'bands:10']);
+    expect([hash.get('bins'), hash.get('assign'), hash.get('seed'), hash.get('grid')]).toEqual(['equal:5', 'draw', '42', 'bands:10']);
   });
 
   it('ignores, and names, a setting the settings reader refuses', () => {
-    const { state: back, ignored } = decodeUrlState('#bins=equal:-5&grid=healpix:33&assign=overlap:0.25&seed=x');
+    const { state: back, ignored } = decodeUrlState('#bins=equal:-5&grid=healpix:33&assign=share:0.25&seed=x');
     expect(back.settings.bins).toEqual(DEFAULT_RUN_SETTINGS.bins);
     expect(back.settings.grid).toEqual(DEFAULT_RUN_SETTINGS.grid);
-    expect(back.settings.assign).toEqual({ kind: 'overlap', fraction: 0.25 });
+    expect(back.settings.assign).toEqual({ kind: 'share', fraction: 0.25 });
     expect([...ignored].sort()).toEqual(['bins=equal:-5', 'grid=healpix:33', 'seed=x']);
   });
 

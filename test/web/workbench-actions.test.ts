@@ -133,7 +133,7 @@ describe('opening a session file', () => {
   const sessionFile = (settings: Record<string, unknown>) => new File([JSON.stringify({
     format: 'driftgrid-session', formatVersion: 2, tool: { name: 'driftgrid', version: '0.1.0' },
     inputs: { occurrences: { path: 'occurrences.csv', sha256: 'a'.repeat(64), bytes: 10 } },
-    settings: { bins: 'stages', assign: 'midpoint', seed: 1, grid: 'healpix:32', map: {}, ...settings },
+    settings: { bins: 'stages', assign: 'mid-age', seed: 1, grid: 'healpix:32', map: {}, ...settings },
   })], 'session.json');
 
   it('refuses an unknown setting in the words of the command line, and asks nothing of the worker', async () => {

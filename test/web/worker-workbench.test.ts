@@ -103,7 +103,7 @@ describe('the analysis worker', () => {
     // A 10° square of places, one inside, and a far place (30°N, 5°E) on lines 5 and 8: it about
     // doubles the hull (test/sphere/hull-lever.test.ts works this slice against geographiclib).
     const rows = ['0,0', '0,10', '10,10', '30,5', '10,0', '5,5', '30,5'].map((place, k) => `T${k},8,6,${place}`);
-    const csv = ['taxon,max_ma,min_ma,palaeo_lat,palaeo_lon', ...rows].join('\n');
+    const csv = ['taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon', ...rows].join('\n');
     const bench = new Workbench();
     bench.setTable(await readOccurrenceTable({ kind: 'file', file: new File([csv], 'lever.csv') }, {}, progress));
     const { view } = bench.analyse({ ...DEFAULT_RUN_SETTINGS, bins: { kind: 'equal', widthMyr: 10 } });

@@ -24,7 +24,7 @@ export const SERIES: readonly SeriesSpec[] = [
   { key: 'taxa', label: 'taxa', unit: '', decimals: 0, colour: [204, 121, 167], dash: '' },
   { key: 'cells', label: 'occupied cells', unit: '', decimals: 0, colour: [0, 158, 115], dash: '' },
   { key: 'hullKm2', label: 'hull area', unit: 'km²', decimals: 0, colour: OVERLAY_COLOURS.hull, dash: '6 3' },
-  { key: 'mstKm', label: 'MST length', unit: 'km', decimals: 0, colour: OVERLAY_COLOURS.spanningTree, dash: '2 2' },
+  { key: 'mstKm', label: 'spanning-tree length', unit: 'km', decimals: 0, colour: OVERLAY_COLOURS.spanningTree, dash: '2 2' },
   { key: 'latSpan', label: 'latitude span', unit: '°', decimals: 1, colour: [0, 0, 0], dash: '8 2 2 2' },
 ];
 

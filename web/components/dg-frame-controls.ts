@@ -13,10 +13,10 @@ import { WorkbenchPanel } from './workbench-panel';
 const CHART_BINS: ReadonlyArray<readonly [ChartScaleRank, string]> = [['stages', 'Chart stages'], ['epochs', 'Chart epochs'], ['periods', 'Chart periods']];
 /** First values when the user switches to a kind that takes a number. */
 const EQUAL_BINS: BinsChoice = { kind: 'equal', widthMyr: 10 };
-const OVERLAP: AssignChoice = { kind: 'overlap', fraction: 0.5 };
+const SHARE: AssignChoice = { kind: 'share', fraction: 0.5 };
 const BANDS: GridChoice = { kind: 'bands', degrees: 5 };
 const HEALPIX: GridChoice = { kind: 'healpix', nside: 32 };
-const ASSIGN_KINDS = ['midpoint', 'within', 'random'] as const;
+const ASSIGN_KINDS = ['mid-age', 'whole-range', 'draw'] as const;
 const NSIDES = [4, 8, 16, 32, 64, 128, 256];
 
 /** The bins choice a select value names. */
@@ -28,7 +28,7 @@ function binsChoice(value: string): BinsChoice {
 
 function assignChoice(value: string): AssignChoice {
   const kind = ASSIGN_KINDS.find((k) => k === value);
-  return kind === undefined ? OVERLAP : { kind };
+  return kind === undefined ? SHARE : { kind };
 }
 
 export class DgFrameControls extends WorkbenchPanel {
@@ -65,14 +65,14 @@ export class DgFrameControls extends WorkbenchPanel {
       <div class="pair">
         <label for="assign">Assign by</label>
         <select id="assign" ?disabled=${disabled} @change=${(e: Event) => this.change({ assign: assignChoice((e.target as HTMLSelectElement).value) })}>
-          <option value="midpoint" ?selected=${assign.kind === 'midpoint'}>Mid-age of the range</option>
-          <option value="within" ?selected=${assign.kind === 'within'}>Range within one slice</option>
-          <option value="overlap" ?selected=${assign.kind === 'overlap'}>Largest overlap, at least…</option>
-          <option value="random" ?selected=${assign.kind === 'random'}>Random age in the range</option>
+          <option value="mid-age" ?selected=${assign.kind === 'mid-age'}>Mid-age of the range</option>
+          <option value="whole-range" ?selected=${assign.kind === 'whole-range'}>Whole range in one slice</option>
+          <option value="share" ?selected=${assign.kind === 'share'}>Largest share of the range, at least…</option>
+          <option value="draw" ?selected=${assign.kind === 'draw'}>Age drawn in the range</option>
         </select>
-        ${assign.kind !== 'overlap' ? nothing : html`<label>share
-          <input type="number" min="0.01" max="1" step="0.05" .value=${String(assign.fraction)} @change=${(e: Event) => this.change({ assign: { kind: 'overlap', fraction: (e.target as HTMLInputElement).valueAsNumber } })}></label>`}
-        ${assign.kind !== 'random' ? nothing : html`<label>seed
+        ${assign.kind !== 'share' ? nothing : html`<label>share
+          <input type="number" min="0.01" max="1" step="0.05" .value=${String(assign.fraction)} @change=${(e: Event) => this.change({ assign: { kind: 'share', fraction: (e.target as HTMLInputElement).valueAsNumber } })}></label>`}
+        ${assign.kind !== 'draw' ? nothing : html`<label>seed
           <input type="number" min="0" step="1" .value=${String(s.seed)} @change=${(e: Event) => this.change({ seed: Number((e.target as HTMLInputElement).value) })}></label>`}
       </div>
       <div class="pair">

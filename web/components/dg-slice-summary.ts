@@ -58,11 +58,11 @@ export class DgSliceSummary extends LitElement {
         <dt>${collections}</dt><dd data-field="collections">${number(s.collections)}</dd>
         <dt>Taxa</dt><dd data-field="taxa">${number(s.taxa)}</dd>
         <dt>Occupied cells</dt><dd data-field="cells">${number(s.cells)}</dd>
-        <dt>Hull area, km²</dt><dd data-field="hull_km2">${number(s.hullKm2)}</dd>
-        <dt>Spanning tree, km</dt><dd data-field="mst_km">${number(s.mstKm)}</dd>
-        <dt>Latitude span, °</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
-        <dt>Hull without its lever, km²</dt><dd data-field="hull_without_km2">${number(s.hullWithoutKm2)}</dd>
-        <dt>Span without one place, °</dt><dd data-field="span_without_deg">${number(s.spanWithoutDeg, 1)}</dd>
+        <dt>Hull area (km²)</dt><dd data-field="hull_km2">${number(s.hullKm2)}</dd>
+        <dt>Spanning-tree length (km)</dt><dd data-field="mst_km">${number(s.mstKm)}</dd>
+        <dt>Latitude span (°)</dt><dd data-field="lat_span">${number(s.latSpan, 1)}</dd>
+        <dt>Hull without its lever (km²)</dt><dd data-field="hull_without_km2">${number(s.hullWithoutKm2)}</dd>
+        <dt>Span without one place (°)</dt><dd data-field="span_without_deg">${number(s.spanWithoutDeg, 1)}</dd>
       </dl>
       ${this.renderLever()}
       ${cautions.length === 0 ? nothing : html`<ul aria-label="Cautions">${cautions.map((c) => html`<li>${c}</li>`)}</ul>`}`;
@@ -75,7 +75,7 @@ function cautionText(caution: SliceCaution): string {
     case SLICE_CAUTION.noOccurrences: return 'No occurrences in this slice.';
     case SLICE_CAUTION.fewPlaces: return `Only ${caution.places} distinct places: every footprint measure is noisy here.`;
     case SLICE_CAUTION.noHull: return `No convex hull: ${caution.reason}.`;
-    case SLICE_CAUTION.wideHull: return 'The hull covers much of a hemisphere: a few outlying sites govern its area; compare with cells and tree length.';
+    case SLICE_CAUTION.wideHull: return 'The hull covers much of a hemisphere: a few outlying sites govern its area; compare with cells and spanning-tree length.';
   }
 }
 

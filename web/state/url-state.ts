@@ -26,7 +26,7 @@ export function encodeUrlState(state: UrlState): string {
   const s = state.settings;
   p.set('bins', binsText(s.bins));
   p.set('assign', assignText(s.assign));
-  if (s.assign.kind === 'random') p.set('seed', String(s.seed));
+  if (s.assign.kind === 'draw') p.set('seed', String(s.seed));
   p.set('grid', gridText(s.grid));
   if (s.rotateAt !== DEFAULT_RUN_SETTINGS.rotateAt) p.set('rotate-at', s.rotateAt);
   if (s.preferModel) p.set('prefer-model', '1');

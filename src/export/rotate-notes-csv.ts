@@ -1,6 +1,6 @@
 import { csvLine, DECIMALS, trimmed } from './csv-text';
 
-export const RECONSTRUCT_NOTES_COLUMNS = ['feature', 'plate_id', 'slice', 'slice_name', 'reconstruction_age_ma', 'note'] as const;
+export const ROTATE_NOTES_COLUMNS = ['feature', 'plate_id', 'slice', 'slice_name', 'placed_at_ma', 'note'] as const;
 
 /** One note on one input feature; slice fields absent for a note on the feature as read. */
 export interface FeatureNote {
@@ -13,10 +13,10 @@ export interface FeatureNote {
   readonly note: string;
 }
 
-/** `reconstruct-notes.csv`: every feature left out of a slice, clamped, or changed on reading. */
-export function reconstructNotesCsv(notes: readonly FeatureNote[]): string {
+/** `rotate-notes.csv`: every feature left out of a slice, clamped, or changed on reading. */
+export function rotateNotesCsv(notes: readonly FeatureNote[]): string {
   return [
-    csvLine(RECONSTRUCT_NOTES_COLUMNS),
+    csvLine(ROTATE_NOTES_COLUMNS),
     ...notes.map((n) => csvLine([
       String(n.feature), String(n.plateId), n.slice === undefined ? '' : String(n.slice), n.sliceName ?? '',
       n.ageMa === undefined ? '' : trimmed(n.ageMa, DECIMALS.ageMa), n.note,

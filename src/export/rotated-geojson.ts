@@ -1,6 +1,6 @@
 /**
  * Reconstructed base polygons as RFC 7946 GeoJSON text, one feature per line: the input
- * feature's `id` and properties, then `slice`, `slice_name` and `reconstruction_age_ma`, and the
+ * feature's `id` and properties, then `slice`, `slice_name` and `placed_at_ma`, and the
  * reconstructed geometry with positions to DECIMALS.degrees.
  */
 import type { MultiPolygon, Polygon, Position } from 'geojson';
@@ -10,7 +10,7 @@ export const FEATURE_COLLECTION_START = '{"type":"FeatureCollection","features":
 export const FEATURE_COLLECTION_END = '\n]}\n';
 export const FEATURE_SEPARATOR = ',\n';
 
-/** What reconstruct adds to a feature's properties. */
+/** What rotate adds to a feature's properties. */
 export interface SliceProperties {
   /** Slice number from 1 (the oldest). */
   readonly slice: number;
@@ -36,7 +36,7 @@ export function geometryText(geometry: Polygon | MultiPolygon): string {
 export function featureText(
   id: string | number | undefined, properties: Readonly<Record<string, unknown>>, added: SliceProperties, geometry: Polygon | MultiPolygon,
 ): string {
-  const all = { ...properties, slice: added.slice, slice_name: added.sliceName, reconstruction_age_ma: Number(trimmed(added.ageMa, DECIMALS.ageMa)) };
+  const all = { ...properties, slice: added.slice, slice_name: added.sliceName, placed_at_ma: Number(trimmed(added.ageMa, DECIMALS.ageMa)) };
   const idText = id === undefined ? '' : `"id":${JSON.stringify(id)},`;
   return `{"type":"Feature",${idText}"properties":${JSON.stringify(all)},"geometry":${geometryText(geometry)}}`;
 }

@@ -12,7 +12,7 @@ import { assignSlices, findChartInterval } from '../time';
 import { oldestAge } from '../table/oldest-age';
 import { excludedRowsOfFile } from './excluded-rows';
 import { readTableFile, scanRecordsFile } from './read-table-file';
-import type { ReconstructContext } from './reconstruct-command';
+import type { RotateContext } from './rotate-command';
 import { countBy, modelNotes } from './summary';
 import { prepareTargets } from './write-results';
 
@@ -20,11 +20,11 @@ import { prepareTargets } from './write-results';
 const FLUSH_CHARS = 1 << 20;
 
 /**
- * reconstruct on a table: the file written back unchanged, record by record, with
- * palaeo_lat, palaeo_lon and reconstruction_age_ma appended (empty where a row has no position;
+ * rotate on a table: the file written back unchanged, record by record, with
+ * palaeo_lat, palaeo_lon and placed_at_ma appended (empty where a row has no position;
  * those rows are in rejects.csv with the reason). Table palaeocoordinates are not used.
  */
-export async function reconstructTable(context: ReconstructContext): Promise<void> {
+export async function rotateTable(context: RotateContext): Promise<void> {
   const { options, model } = context;
   const { input } = options;
   const read = await readTableFile(input, { mapping: options.settings.map, resolveInterval: findChartInterval }).catch((error: unknown) => {
@@ -33,13 +33,13 @@ export async function reconstructTable(context: ReconstructContext): Promise<voi
   refuseClash(read.columns.header, input);
   const { table } = read;
   const scale = context.scaleFor(oldestAge(table));
-  const assignment = assignSlices(table.maxMa, table.minMa, scale, assignRuleOf(options.settings.assign, options.settings.seed));
+  const assignment = assignSlices(table.oldestMa, table.youngestMa, scale, assignRuleOf(options.settings.assign, options.settings.seed));
   const placement = placeOccurrences(table, assignment, scale, model, { rotateAt: options.settings.rotateAt, preferModel: false, modelOnly: true });
   const exclusions = collectExclusions(assignment, placement, assignment.slice);
   const rejects = [...read.rejects, ...(await excludedRowsOfFile(input, table, exclusions, placement, model, options.settings.rotateAt))];
 
   const extension = extname(input);
-  const [tablePath, rejectsPath] = await prepareTargets(options.out, [`${basename(input, extension)}-reconstructed${extension}`, 'rejects.csv'], context.inputs);
+  const [tablePath, rejectsPath] = await prepareTargets(options.out, [`${basename(input, extension)}-rotated${extension}`, 'rejects.csv'], context.inputs);
   await writeTableBack(input, tablePath, table, placement, read.delimiter);
   await writeFile(rejectsPath, rejectsCsv(rejects));
   if (options.quiet) return;
@@ -47,7 +47,7 @@ export async function reconstructTable(context: ReconstructContext): Promise<voi
   const out = [`rows read: ${n(read.rowsRead)}; accepted: ${n(table.count)}; rejected on reading: ${n(read.rejects.length)}`];
   for (const [field, count] of countBy(read.rejects.map((r) => r.field))) out.push(`  rejected for ${field}: ${n(count)}`);
   const at = options.settings.rotateAt === ROTATE_AT.slice ? "each slice's mid-age" : "each row's own age";
-  out.push(`reconstructed with ${model.source} at ${at}: ${n(placement.fromModel)}${placement.clamped > 0 ? ` (${n(placement.clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`);
+  out.push(`rotated with ${model.source} to ${at}: ${n(placement.fromModel)}${placement.clamped > 0 ? ` (${n(placement.clamped)} clamped to the oldest age the model reaches for their plate)` : ''}`);
   for (const [reason, count] of countBy(Array.from(exclusions.reasons, (code) => {
     const { stage, reason } = EXCLUSIONS[exclusionName(code)];
     return `${stage === EXCLUSION_STAGE.slice ? 'not in any slice' : 'not placed'}, ${reason}`;
@@ -65,7 +65,7 @@ function refuseClash(header: readonly string[], input: string): void {
   const taken = new Set(PLACEMENT_COLUMNS.map(normaliseHeader));
   const clash = header.flatMap((h, i) => (taken.has(normaliseHeader(h)) ? [`column ${i + 1} ("${h}")`] : []));
   if (clash.length === 0) return;
-  throw new Error(`${input}: ${clash.join(' and ')} ha${clash.length === 1 ? 's' : 've'} the name of a column reconstruct appends (${PLACEMENT_COLUMNS.join(', ')}); rename or remove ${clash.length === 1 ? 'it' : 'them'} in a copy of the table first.`);
+  throw new Error(`${input}: ${clash.join(' and ')} ha${clash.length === 1 ? 's' : 've'} the name of a column rotate appends (${PLACEMENT_COLUMNS.join(', ')}); rename or remove ${clash.length === 1 ? 'it' : 'them'} in a copy of the table first.`);
 }
 
 /** The line ending of the first line: CRLF, CR or LF (LF when the chunk holds no line break). */

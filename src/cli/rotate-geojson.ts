@@ -1,15 +1,15 @@
 import { open, readFile, writeFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
-import { reconstructNotesCsv, type FeatureNote } from '../export/reconstruct-notes-csv';
-import { FEATURE_COLLECTION_END, FEATURE_COLLECTION_START, FEATURE_SEPARATOR, featureText } from '../export/reconstructed-geojson';
+import { rotateNotesCsv, type FeatureNote } from '../export/rotate-notes-csv';
+import { FEATURE_COLLECTION_END, FEATURE_COLLECTION_START, FEATURE_SEPARATOR, featureText } from '../export/rotated-geojson';
 import { sliceFileName } from '../export/slice-file-name';
 import { plateFeaturesOf, reconstructFeaturesAt, type ReconstructedFeature } from '../placement';
 import type { RotationModel } from '../rotation';
-import type { ReconstructContext } from './reconstruct-command';
+import type { RotateContext } from './rotate-command';
 import { modelNotes } from './summary';
 import { prepareTargets } from './write-results';
 
-export const NOTES_FILE = 'reconstruct-notes.csv';
+export const NOTES_FILE = 'rotate-notes.csv';
 
 /** Oldest finite age the model reaches for any plate (where equal bins end for polygons). */
 function oldestReach(model: RotationModel): number {
@@ -33,18 +33,18 @@ async function readGeoJson(path: string): Promise<unknown> {
 }
 
 /**
- * reconstruct on GeoJSON: the polygons carried to each slice's mid-age, one FeatureCollection
+ * rotate on GeoJSON: the polygons carried to each slice's mid-age, one FeatureCollection
  * per slice or all in one file (--single-file); every feature left out of a slice, clamped, or
- * rewound on reading is listed in reconstruct-notes.csv.
+ * rewound on reading is listed in rotate-notes.csv.
  */
-export async function reconstructGeoJson(context: ReconstructContext): Promise<void> {
+export async function rotateGeoJson(context: RotateContext): Promise<void> {
   const { options, model } = context;
   const { input } = options;
   const { features, notes: readingNotes } = plateFeaturesOf(await readGeoJson(input), input);
   const scale = context.scaleFor(oldestReach(model));
   const count = scale.names.length;
   const sliceNames = scale.names.map((name, s) => sliceFileName(s + 1, count, name, 'geojson'));
-  const outputs = options.singleFile ? [`${basename(input, extname(input))}-reconstructed.geojson`] : sliceNames;
+  const outputs = options.singleFile ? [`${basename(input, extname(input))}-rotated.geojson`] : sliceNames;
   const targets = await prepareTargets(options.out, [...outputs, NOTES_FILE], context.inputs);
   const notes: FeatureNote[] = [...readingNotes];
   const single = options.singleFile ? await open(targets[0], 'w') : undefined;
@@ -68,12 +68,12 @@ export async function reconstructGeoJson(context: ReconstructContext): Promise<v
     await single?.close();
   }
   const notesPath = targets[targets.length - 1];
-  await writeFile(notesPath, reconstructNotesCsv(notes));
+  await writeFile(notesPath, rotateNotesCsv(notes));
   if (options.quiet) return;
   const leftOut = features.length * count - written;
   const out = [
     `features read: ${features.length}; slices: ${count} (${slicesWithFeatures} with features)`,
-    `reconstructed with ${model.source}: ${written} feature-slices${clamped > 0 ? ` (${clamped} clamped to the oldest age the model reaches for their plate)` : ''}; left out: ${leftOut}${leftOut > 0 || notes.length > 0 ? ` (see ${NOTES_FILE})` : ''}`,
+    `rotated with ${model.source}: ${written} feature-slices${clamped > 0 ? ` (${clamped} clamped to the oldest age the model reaches for their plate)` : ''}; left out: ${leftOut}${leftOut > 0 || notes.length > 0 ? ` (see ${NOTES_FILE})` : ''}`,
     ...(readingNotes.length > 0 ? [`  ${readingNotes.length} note(s) on reading, e.g. ${readingNotes[0].note}`] : []),
     ...modelNotes(model),
     options.singleFile ? `wrote ${targets[0]}, ${notesPath}` : `wrote ${count} files in ${options.out} (${sliceNames[0]} … ${sliceNames[count - 1]}), ${notesPath}`,

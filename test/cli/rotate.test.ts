@@ -31,23 +31,23 @@ function demoWithoutPalaeo(dir: string): string {
   return path;
 }
 
-describe('driftgrid reconstruct on the demo table', () => {
+describe('driftgrid rotate on the demo table', () => {
   let dir: string;
   let input: string;
   beforeAll(async () => {
-    dir = tempDir('reconstruct-table');
+    dir = tempDir('rotate-table');
     input = demoWithoutPalaeo(dir);
-    const run = await runCli('reconstruct', input, '--rotation', POLES, '--rotate-at', 'occurrence', '--out', join(dir, 'r'));
+    const run = await runCli('rotate', input, '--rotation', POLES, '--rotate-at', 'occurrence', '--out', join(dir, 'r'));
     expect(run.stderr).toBe('');
     expect(run.status).toBe(0);
-    expect(run.stdout).toMatch(/reconstructed with assets\/demo\/poles\.csv at each row's own age: 49,906\n/);
+    expect(run.stdout).toMatch(/rotated with assets\/demo\/poles\.csv to each row's own age: 49,906\n/);
   });
 
-  it('writes every record back as it was, with palaeo_lat, palaeo_lon and reconstruction_age_ma appended', () => {
+  it('writes every record back as it was, with palaeo_lat, palaeo_lon and placed_at_ma appended', () => {
     const before = readFileSync(input, 'utf8').split('\n');
-    const after = readFileSync(join(dir, 'r', 'sites-reconstructed.csv'), 'utf8').split('\n');
+    const after = readFileSync(join(dir, 'r', 'sites-rotated.csv'), 'utf8').split('\n');
     expect(after.length).toBe(before.length);
-    expect(after[0]).toBe(`${before[0]},palaeo_lat,palaeo_lon,reconstruction_age_ma`);
+    expect(after[0]).toBe(`${before[0]},palaeo_lat,palaeo_lon,placed_at_ma`);
     const altered = after.slice(1, -1).filter((line, k) => !line.startsWith(`${before[k + 1]},`) || line.slice(before[k + 1].length).split(',').length !== 4);
     expect(altered).toEqual([]);
     expect(after[after.length - 1]).toBe('');
@@ -58,11 +58,11 @@ describe('driftgrid reconstruct on the demo table', () => {
   // midpoint; both columns are rounded to 4 decimals, so they agree to better than 1e-3°.
   it('places every site where the demo generator placed it, at its age midpoint', () => {
     const original = readCsv('assets/demo/occurrences.csv');
-    const rows = readCsv(join(dir, 'r', 'sites-reconstructed.csv'));
+    const rows = readCsv(join(dir, 'r', 'sites-rotated.csv'));
     let worst = 0;
     rows.forEach((r, k) => {
       const o = original[k];
-      expect(Number(r.reconstruction_age_ma)).toBeCloseTo((Number(o.max_ma) + Number(o.min_ma)) / 2, 6);
+      expect(Number(r.placed_at_ma)).toBeCloseTo((Number(o.oldest_ma) + Number(o.youngest_ma)) / 2, 6);
       worst = Math.max(worst, angleBetweenDeg(unit(Number(r.palaeo_lat), Number(r.palaeo_lon)), unit(Number(o.palaeo_lat), Number(o.palaeo_lon))));
     });
     expect(worst).toBeLessThan(1e-3);
@@ -70,18 +70,18 @@ describe('driftgrid reconstruct on the demo table', () => {
   });
 
   it('refuses a table that already has a column of an appended name', async () => {
-    const run = await runCli('reconstruct', 'assets/demo/occurrences.csv', '--rotation', POLES, '--out', tempDir('clash'));
+    const run = await runCli('rotate', 'assets/demo/occurrences.csv', '--rotation', POLES, '--out', tempDir('clash'));
     expect(run.status).toBe(1);
-    expect(run.stderr).toMatch(/occurrences\.csv: column 4 \("palaeo_lat"\) and column 5 \("palaeo_lon"\) have the name of a column reconstruct appends/);
+    expect(run.stderr).toMatch(/occurrences\.csv: column 4 \("palaeo_lat"\) and column 5 \("palaeo_lon"\) have the name of a column rotate appends/);
   });
 });
 
-describe('driftgrid reconstruct on a table written in an unusual way', () => {
+describe('driftgrid rotate on a table written in an unusual way', () => {
   // A semicolon-delimited file with a byte-order mark and CRLF endings, quoted fields holding the
   // delimiter, doubled quotes and a line break, a blank line, a record with too few fields, a row
   // without a plate and one whose plate is not in the model.
   const lines = [
-    'name;max_ma;min_ma;lat;lon;plate_id;note',
+    'name;oldest_ma;youngest_ma;lat;lon;plate_id;note',
     '"Alpha; beta";150;145;45.5;-120.25;101;"said ""here"""',
     '',
     'Gamma;10;5;-10;20;;plain',
@@ -93,18 +93,18 @@ describe('driftgrid reconstruct on a table written in an unusual way', () => {
   let dir: string;
   let out: string[];
   beforeAll(async () => {
-    dir = tempDir('reconstruct-odd');
+    dir = tempDir('rotate-odd');
     writeFileSync(join(dir, 'odd.csv'), text);
-    const run = await runCli('reconstruct', join(dir, 'odd.csv'), '--rotation', POLES, '--map', 'taxon=name', '--rotate-at', 'occurrence', '--out', join(dir, 'r'), '--quiet');
+    const run = await runCli('rotate', join(dir, 'odd.csv'), '--rotation', POLES, '--map', 'taxon=name', '--rotate-at', 'occurrence', '--out', join(dir, 'r'), '--quiet');
     expect(run.stderr).toBe('');
-    out = readFileSync(join(dir, 'r', 'odd-reconstructed.csv'), 'utf8').slice(1).split('\r\n');
+    out = readFileSync(join(dir, 'r', 'odd-rotated.csv'), 'utf8').slice(1).split('\r\n');
   });
 
   it('keeps the byte-order mark, the delimiter, the line endings and every field byte for byte', () => {
-    expect(readFileSync(join(dir, 'r', 'odd-reconstructed.csv'), 'utf8').startsWith('\ufeff')).toBe(true);
+    expect(readFileSync(join(dir, 'r', 'odd-rotated.csv'), 'utf8').startsWith('\ufeff')).toBe(true);
     const records = [lines[0], lines[1], lines[2], lines[3], 'Delta;10;5;0;0;101;"two', 'lines"', lines[5], lines[6], ''];
     expect(out.length).toBe(records.length);
-    expect(out[0]).toBe(`${lines[0]};palaeo_lat;palaeo_lon;reconstruction_age_ma`);
+    expect(out[0]).toBe(`${lines[0]};palaeo_lat;palaeo_lon;placed_at_ma`);
     expect(out[1]).toMatch(/^"Alpha; beta";150;145;45\.5;-120\.25;101;"said ""here""";-?\d+\.\d{6};-?\d+\.\d{6};147\.5$/);
     expect(out[2]).toBe(''); // the blank line stays, so line numbers match the input's
     expect(out[3]).toBe('Gamma;10;5;-10;20;;plain;;;');
@@ -121,7 +121,7 @@ describe('driftgrid reconstruct on a table written in an unusual way', () => {
   });
 });
 
-describe('driftgrid reconstruct on the demo land polygons', () => {
+describe('driftgrid rotate on the demo land polygons', () => {
   const stages = chartScale('stages');
   const mid = (s: number) => 0.5 * (stages.baseMa[s] + stages.topMa[s]);
   const reached = stages.names.map((_, s) => s).filter((s) => mid(s) <= DEMO_REACH_MA);
@@ -129,8 +129,8 @@ describe('driftgrid reconstruct on the demo land polygons', () => {
   let dir: string;
   let files: string[];
   beforeAll(async () => {
-    dir = tempDir('reconstruct-land');
-    const run = await runCli('reconstruct', LAND, '--rotation', POLES, '--bins', 'stages', '--out', join(dir, 'r'));
+    dir = tempDir('rotate-land');
+    const run = await runCli('rotate', LAND, '--rotation', POLES, '--bins', 'stages', '--out', join(dir, 'r'));
     expect(run.stderr).toBe('');
     expect(run.status).toBe(0);
     files = readdirSync(join(dir, 'r')).filter((f) => f.endsWith('.geojson')).sort();
@@ -142,13 +142,13 @@ describe('driftgrid reconstruct on the demo land polygons', () => {
     expect(files[stages.names.length - 1]).toBe('slice-102-meghalayan.geojson');
   });
 
-  it('keeps every feature in the slices the model reaches, and lists each left-out feature in reconstruct-notes.csv', () => {
+  it('keeps every feature in the slices the model reaches, and lists each left-out feature in rotate-notes.csv', () => {
     const counts = files.map((f) => readJson<FeatureCollection>(join(dir, 'r', f)).features.length);
     expect(counts).toEqual(stages.names.map((_, s) => (reached.includes(s) ? land.length : 0)));
-    const notes = readCsv(join(dir, 'r', 'reconstruct-notes.csv'));
+    const notes = readCsv(join(dir, 'r', 'rotate-notes.csv'));
     expect(notes.length).toBe(land.length * (stages.names.length - reached.length));
     expect(notes[0]).toEqual({
-      feature: '1', plate_id: '101', slice: '1', slice_name: 'Fortunian', reconstruction_age_ma: '533.9',
+      feature: '1', plate_id: '101', slice: '1', slice_name: 'Fortunian', placed_at_ma: '533.9',
       note: `left out: the slice's mid-age 533.9 Ma is older than ${POLES} reaches for plate 101 (back to 300 Ma); --beyond-model clamp would place it as at 300 Ma`,
     });
   });
@@ -187,8 +187,8 @@ describe('driftgrid reconstruct on the demo land polygons', () => {
   // (d3-geo's geoContains, great-circle reading).
   it('puts each site reconstructed at the slice mid-age inside its landmass reconstructed for that slice', async () => {
     const sites = demoWithoutPalaeo(dir);
-    expect((await runCli('reconstruct', sites, '--rotation', POLES, '--bins', 'stages', '--out', join(dir, 'sites'), '--quiet')).status).toBe(0);
-    const rows = readCsv(join(dir, 'sites', 'sites-reconstructed.csv'));
+    expect((await runCli('rotate', sites, '--rotation', POLES, '--bins', 'stages', '--out', join(dir, 'sites'), '--quiet')).status).toBe(0);
+    const rows = readCsv(join(dir, 'sites', 'sites-rotated.csv'));
     const cache = new Map<string, Map<number, Polygon[]>>();
     const landAt = (file: string) => {
       if (!cache.has(file)) {
@@ -199,7 +199,7 @@ describe('driftgrid reconstruct on the demo land polygons', () => {
     };
     let checked = 0;
     for (const r of rows) {
-      const age = Number(r.reconstruction_age_ma);
+      const age = Number(r.placed_at_ma);
       const s = reached.find((k) => Math.abs(mid(k) - age) < 1e-9);
       expect(s).toBeDefined();
       const parts = landAt(files[s as number]).get(Number(r.plate_id)) ?? [];
@@ -209,30 +209,30 @@ describe('driftgrid reconstruct on the demo land polygons', () => {
     expect(checked).toBe(49906);
   });
 
-  it('with --single-file writes one FeatureCollection with slice, slice_name and reconstruction_age_ma on every feature', async () => {
+  it('with --single-file writes one FeatureCollection with slice, slice_name and placed_at_ma on every feature', async () => {
     const out = join(dir, 'single');
-    expect((await runCli('reconstruct', LAND, '--rotation', POLES, '--single-file', '--out', out, '--quiet')).status).toBe(0);
-    const features = readJson<FeatureCollection<Polygon | MultiPolygon, Record<string, unknown>>>(join(out, 'land-reconstructed.geojson')).features;
+    expect((await runCli('rotate', LAND, '--rotation', POLES, '--single-file', '--out', out, '--quiet')).status).toBe(0);
+    const features = readJson<FeatureCollection<Polygon | MultiPolygon, Record<string, unknown>>>(join(out, 'land-rotated.geojson')).features;
     expect(features.length).toBe(land.length * reached.length);
     const first = features[0].properties;
     const s = reached[0];
-    expect(first).toEqual({ plate_id: 101, name: 'Zisdridavar', slice: s + 1, slice_name: stages.names[s], reconstruction_age_ma: Number(mid(s).toFixed(6)) });
-    expect(readdirSync(out).sort()).toEqual(['land-reconstructed.geojson', 'reconstruct-notes.csv']);
+    expect(first).toEqual({ plate_id: 101, name: 'Zisdridavar', slice: s + 1, slice_name: stages.names[s], placed_at_ma: Number(mid(s).toFixed(6)) });
+    expect(readdirSync(out).sort()).toEqual(['land-rotated.geojson', 'rotate-notes.csv']);
   });
 
   it('with --beyond-model clamp keeps every feature in every slice and notes each clamped one', async () => {
     const out = join(dir, 'clamp');
-    const run = await runCli('reconstruct', LAND, '--rotation', POLES, '--bins', 'periods', '--beyond-model', 'clamp', '--out', out);
+    const run = await runCli('rotate', LAND, '--rotation', POLES, '--bins', 'periods', '--beyond-model', 'clamp', '--out', out);
     const periods = chartScale('periods');
     const clamped = periods.names.filter((_, s) => 0.5 * (periods.baseMa[s] + periods.topMa[s]) > DEMO_REACH_MA).length;
-    expect(run.stdout).toMatch(new RegExp(`reconstructed with .*: ${land.length * periods.names.length} feature-slices \\(${land.length * clamped} clamped`));
-    const notes = readCsv(join(out, 'reconstruct-notes.csv'));
+    expect(run.stdout).toMatch(new RegExp(`rotated with .*: ${land.length * periods.names.length} feature-slices \\(${land.length * clamped} clamped`));
+    const notes = readCsv(join(out, 'rotate-notes.csv'));
     expect(notes.length).toBe(land.length * clamped);
-    expect(notes.every((n) => n.note.startsWith('clamped: reconstructed at 300 Ma') && n.reconstruction_age_ma === '300')).toBe(true);
+    expect(notes.every((n) => n.note.startsWith('clamped: reconstructed at 300 Ma') && n.placed_at_ma === '300')).toBe(true);
   });
 });
 
-describe('reconstruct inputs and options that cannot be used', () => {
+describe('rotate inputs and options that cannot be used', () => {
   const geojson = (features: unknown[]) => {
     const path = join(tempDir('geo'), 'in.geojson');
     writeFileSync(path, JSON.stringify({ type: 'FeatureCollection', features }));
@@ -243,23 +243,24 @@ describe('reconstruct inputs and options that cannot be used', () => {
   it('leaves a polygon whose plate is not in the model out of every slice, and says so', async () => {
     const path = geojson([{ type: 'Feature', properties: { plate_id: 999 }, geometry: { type: 'Polygon', coordinates: square } }]);
     const out = join(tempDir('unknown-plate'), 'r');
-    const run = await runCli('reconstruct', path, '--rotation', POLES, '--bins', 'periods', '--out', out);
-    expect(run.stdout).toMatch(/reconstructed with .*: 0 feature-slices; left out: 12 \(see reconstruct-notes\.csv\)/);
-    const notes = readCsv(join(out, 'reconstruct-notes.csv'));
+    const run = await runCli('rotate', path, '--rotation', POLES, '--bins', 'periods', '--out', out);
+    expect(run.stdout).toMatch(/rotated with .*: 0 feature-slices; left out: 12 \(see rotate-notes\.csv\)/);
+    const notes = readCsv(join(out, 'rotate-notes.csv'));
     expect(notes.length).toBe(12);
     expect(notes[0].note).toBe(`left out: plate 999 is not in the rotation model ${POLES}`);
   });
 
   it.each([
-    [['reconstruct', 'assets/demo/occurrences.csv'], /reconstruct needs a rotation model: add --rotation <poles\.csv>\./],
-    [['reconstruct', '--rotation', POLES], /reconstruct takes one input, a table or a GeoJSON file; got none/],
-    [['reconstruct', 'test/fixtures/good/present-day.tsv', '--rotation', POLES, '--single-file'], /--single-file applies to GeoJSON input/],
-    [['reconstruct', LAND, '--rotation', POLES, '--rotate-at', 'occurrence'], /--rotate-at applies to tables; assets\/demo\/land\.geojson is GeoJSON/],
-    [['reconstruct', LAND, '--rotation', POLES, '--prefer-model'], /Unknown option '--prefer-model'/],
-    [['reconstruct', 'assets/demo/poles.geojson', '--rotation', POLES], /assets\/demo\/poles\.geojson: cannot read it/],
-    [['reconstruct', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)/],
+    [['rotate', 'assets/demo/occurrences.csv'], /rotate needs a rotation model: add --rotation <poles\.csv>\./],
+    [['rotate', '--rotation', POLES], /rotate takes one input, a table or a GeoJSON file; got none/],
+    [['rotate', 'test/fixtures/good/present-day.tsv', '--rotation', POLES, '--single-file'], /--single-file applies to GeoJSON input/],
+    [['rotate', LAND, '--rotation', POLES, '--rotate-at', 'occurrence'], /--rotate-at applies to tables; assets\/demo\/land\.geojson is GeoJSON/],
+    [['rotate', LAND, '--rotation', POLES, '--prefer-model'], /Unknown option '--prefer-model'/],
+    [['rotate', 'assets/demo/poles.geojson', '--rotation', POLES], /assets\/demo\/poles\.geojson: cannot read it/],
+    [['rotate', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)/],
+    [['reconstruct', LAND, '--rotation', POLES], /^driftgrid: Unknown command "reconstruct"\. Commands: coverage, curves, rotate\. See `driftgrid --help`\.\n$/],
   ])('%j is refused with a message saying what was expected', async (args, message) => {
-    const run = await runCli(...args, '--out', tempDir('reconstruct-opt'));
+    const run = await runCli(...args, '--out', tempDir('rotate-opt'));
     expect(run.status).toBe(1);
     expect(run.stderr).toMatch(message);
     expect(run.stderr).not.toMatch(/\n\s+at /);
@@ -270,7 +271,7 @@ describe('reconstruct inputs and options that cannot be used', () => {
       { type: 'Feature', properties: { plate_id: 101 }, geometry: { type: 'Point', coordinates: [0, 0] } },
       { type: 'Feature', properties: {}, geometry: { type: 'Polygon', coordinates: square } },
     ]);
-    const run = await runCli('reconstruct', path, '--rotation', POLES, '--out', tempDir('bad-geo'));
+    const run = await runCli('rotate', path, '--rotation', POLES, '--out', tempDir('bad-geo'));
     expect(run.status).toBe(1);
     expect(run.stderr).toMatch(/in\.geojson, feature 1 geometry type "Point": expected Polygon or MultiPolygon/);
     expect(run.stderr).toMatch(/in\.geojson, feature 2 plate_id "": expected a property plate_id, a whole number from 0 to 2147483647 \(plate_id is missing\)/);
@@ -279,15 +280,15 @@ describe('reconstruct inputs and options that cannot be used', () => {
   it('refuses a file that is not JSON', async () => {
     const path = join(tempDir('notjson'), 'land.geojson');
     writeFileSync(path, 'plate_id,lat\n1,2\n');
-    const run = await runCli('reconstruct', path, '--rotation', POLES, '--out', tempDir('notjson-out'));
+    const run = await runCli('rotate', path, '--rotation', POLES, '--out', tempDir('notjson-out'));
     expect(run.stderr).toMatch(/land\.geojson: not JSON \(.*\); expected a GeoJSON FeatureCollection/);
   });
 
   it('never writes over an input, even when --out is its folder', async () => {
-    const dir = tempDir('reconstruct-overwrite');
+    const dir = tempDir('rotate-overwrite');
     const poles = join(dir, 'rejects.csv');
     writeFileSync(poles, readFileSync(POLES));
-    const run = await runCli('reconstruct', 'test/fixtures/good/present-day.tsv', '--rotation', poles, '--out', dir);
+    const run = await runCli('rotate', 'test/fixtures/good/present-day.tsv', '--rotation', poles, '--out', dir);
     expect(run.status).toBe(1);
     expect(run.stderr).toMatch(/Refusing to write .*rejects\.csv: it is one of the input files/);
     expect(readFileSync(poles, 'utf8')).toBe(readFileSync(POLES, 'utf8'));
