@@ -7,7 +7,7 @@
  * side test per place off the ring and a hull of its few pocket places, O(n·h) for h vertices,
  * instead of a hull of all the rest, O(h·n log n).
  */
-import { convexHull } from './convex-hull';
+import { GREAT_CIRCLE_TOLERANCE, convexHull } from './convex-hull';
 import { polygonAreaKm2 } from './polygon-area';
 
 export interface HullLever {
@@ -39,7 +39,9 @@ export function hullLever(xyz: Float64Array, ring: Uint32Array | undefined): Hul
     const u = ring[(k + h - 1) % h], v = ring[k], w = ring[(k + 1) % h];
     const size = pocketPlaces(xyz, u, w, offRing, pocket);
     const pocketKm2 = size > 2 ? hullAreaKm2(xyz, pocket.subarray(0, size)) : NaN;
-    const remains = h > 3 || !Number.isNaN(pocketKm2);
+    // Without v a hull remains unless every place left lies on the great circle through u and w:
+    // three ring vertices with nothing off the chord, or a ring whose other vertices are all on it.
+    const remains = size > 2 ? h > 3 || !Number.isNaN(pocketKm2) : h > 3 && !ringOnGreatCircle(xyz, ring, k, u, w);
     triangle[0] = u; triangle[1] = v; triangle[2] = w;
     const without = remains ? areaKm2 - polygonAreaKm2(xyz, triangle) + (Number.isNaN(pocketKm2) ? 0 : pocketKm2) : NaN;
     const shrink = areaKm2 - (remains ? without : 0);
@@ -85,4 +87,23 @@ function hullAreaKm2(xyz: Float64Array, subset: Uint32Array): number {
   for (let k = 0; k < subset.length; k++) picked.set(xyz.subarray(3 * subset[k], 3 * subset[k] + 3), 3 * k);
   const hull = convexHull(picked);
   return hull.kind === 'hull' ? polygonAreaKm2(picked, hull.ring) : NaN;
+}
+
+/**
+ * True when every ring vertex but the k-th lies within GREAT_CIRCLE_TOLERANCE of the great circle
+ * through u and w (as convexHull judges a set to have no hull). Stops at the first vertex off it,
+ * which on a hull with area is the one after w.
+ */
+function ringOnGreatCircle(xyz: Float64Array, ring: Uint32Array, k: number, u: number, w: number): boolean {
+  const ux = xyz[3 * u], uy = xyz[3 * u + 1], uz = xyz[3 * u + 2];
+  const wx = xyz[3 * w], wy = xyz[3 * w + 1], wz = xyz[3 * w + 2];
+  let nx = uy * wz - uz * wy, ny = uz * wx - ux * wz, nz = ux * wy - uy * wx;
+  const length = Math.hypot(nx, ny, nz);
+  nx /= length; ny /= length; nz /= length;
+  const h = ring.length;
+  for (let step = 1; step < h; step++) {
+    const p = ring[(k + step) % h];
+    if (Math.abs(nx * xyz[3 * p] + ny * xyz[3 * p + 1] + nz * xyz[3 * p + 2]) > GREAT_CIRCLE_TOLERANCE) return false;
+  }
+  return true;
 }

@@ -69,6 +69,16 @@ describe('the hull lever (leave-one-out on the convex hull)', () => {
     }
   });
 
+  it('leaves no hull when the places left all lie on one meridian, though the ring had four vertices', () => {
+    // Found by the property above: (0°, −0.5°) sits on the meridian edge between (±0.5°, −0.5°).
+    const lat = Float64Array.of(0, 0, 0.5, -0.5), lon = Float64Array.of(-0.5, 0, -0.5, -0.5);
+    const brute = bruteForce(lat, lon);
+    const lever = hullLever(degreesToUnitVectors(lat, lon), ringOf(lat, lon));
+    if (brute.remains[lever.place]) expect(Math.abs(lever.withoutKm2 - brute.without[lever.place])).toBeLessThan(1e-6);
+    else expect(lever.withoutKm2).toBeNaN();
+    expect(brute.remains[1]).toBe(false);
+  });
+
   it('finds the one far place that doubles a slice hull, with the area left as geographiclib measures it', () => {
     // A 10° square of places (lat, lon) with one inside, and one far north at (30°N, 5°E). Worked
     // by hand: the triangle that place adds has a base of about 10° (the square's north side) and
