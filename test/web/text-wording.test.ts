@@ -72,14 +72,14 @@ describe('cell words', () => {
   });
 
   it('gives a cell centre latitude first, each coordinate with its hemisphere letter', () => {
-    expect(cellCentre(12.34, -45.61)).toBe('centre 12.3° N, 45.6° W');
-    expect(cellCentre(-33.96, 151.18)).toBe('centre 34.0° S, 151.2° E');
+    expect(cellCentre(12.34, -45.61)).toBe('centre: latitude 12.3° N, longitude 45.6° W');
+    expect(cellCentre(-33.96, 151.18)).toBe('centre: latitude 34.0° S, longitude 151.2° E');
   });
 
   it('writes no hemisphere where a coordinate rounds to the equator, the prime meridian or the antimeridian', () => {
-    expect(cellCentre(0.04, -0.04)).toBe('centre 0.0°, 0.0°');
-    expect(cellCentre(-89.99, 179.99)).toBe('centre 90.0° S, 180.0°');
-    expect(cellCentre(45, -180)).toBe('centre 45.0° N, 180.0°');
+    expect(cellCentre(0.04, -0.04)).toBe('centre: latitude 0.0°, longitude 0.0°');
+    expect(cellCentre(-89.99, 179.99)).toBe('centre: latitude 90.0° S, longitude 180.0°');
+    expect(cellCentre(45, -180)).toBe('centre: latitude 45.0° N, longitude 180.0°');
   });
 });
 

@@ -1,0 +1,128 @@
+// The page's layout at the window sizes people use: with the rejects list open (a rejected row
+// far wider than the window) and a cell chosen, the strip, the map and the curves stay inside the
+// window with room to use, nothing overflows sideways, and the latitude panel does not move when
+// the chosen cell changes. Also: arrow keys right after an import. Screenshots go to
+// test-artifacts/e2e/layout-<width>x<height>.png.
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { launchBrowser, openPage, saveScreenshot, startApp, type App } from './harness';
+
+let app: App;
+let browser: Browser;
+
+beforeAll(async () => {
+  app = await startApp();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await app?.close();
+});
+
+async function waitReady(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });
+}
+
+interface Box { left: number; right: number; top: number; bottom: number; width: number; height: number }
+
+function box(page: Page, selector: string): Promise<Box> {
+  return page.locator(selector).first().evaluate((el) => {
+    const r = el.getBoundingClientRect();
+    return { left: r.left, right: r.right, top: r.top, bottom: r.bottom, width: r.width, height: r.height };
+  });
+}
+
+/** Imports the fixture whose rejected row is ~700 characters long; its columns are found by name. */
+async function importLongReject(page: Page): Promise<void> {
+  await page.locator('dg-import-panel input[name="occurrences"]').setInputFiles('test/e2e/fixtures/long-reject.csv');
+  await page.locator('dg-import-panel button', { hasText: 'Read the table' }).click();
+  await expect.poll(async () => (await page.locator('dg-import-panel [data-field="table-summary"]').textContent()) ?? '').toContain('long-reject.csv');
+  await waitReady(page);
+}
+
+describe.each([[1440, 900], [1280, 720], [900, 700]])('at %i×%i', (width, height) => {
+  test('the rejects list open and a cell chosen leave the strip, map and curves whole, and the latitude panel still', async () => {
+    const opened = await openPage(browser, app.url);
+    const { page } = opened;
+    try {
+      await page.setViewportSize({ width, height });
+      await waitReady(page);
+      await importLongReject(page);
+      const details = page.locator('dg-rejects-panel details');
+      if ((await details.getAttribute('open')) === null) await page.locator('dg-rejects-panel summary').click();
+      await expect.poll(() => page.locator('dg-rejects-panel td.original').count()).toBe(1);
+
+      const latitudeBefore = await box(page, 'dg-latitude-panel');
+      // Choosing a cell sets what pointing at it on the map sets (the page's cell-hover event).
+      await page.locator('dg-cell-details select[name="cell"]').selectOption({ index: 1 });
+      await expect.poll(() => page.locator('dg-cell-details li').count()).toBeGreaterThan(0);
+      expect(await box(page, 'dg-latitude-panel')).toEqual(latitudeBefore);
+      await page.locator('dg-cell-details select[name="cell"]').selectOption({ index: 0 });
+      await expect.poll(() => page.locator('dg-cell-details li').count()).toBe(0);
+      expect(await box(page, 'dg-latitude-panel')).toEqual(latitudeBefore);
+
+      expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(width);
+      const main = await page.locator('dg-app main').evaluate((el) => ({ scroll: el.scrollWidth, client: el.clientWidth }));
+      expect(main.scroll, 'the centre column does not overflow sideways').toBeLessThanOrEqual(main.client);
+      for (const [name, selector] of [['time strip', 'dg-time-strip .strip'], ['map', 'dg-app .map'], ['curves', 'dg-curves-panel'], ['latitude panel', 'dg-latitude-panel']]) {
+        await page.locator(selector).first().scrollIntoViewIfNeeded();
+        const b = await box(page, selector);
+        expect(b.width, `${name} width`).toBeGreaterThan(name === 'time strip' ? 150 : 250);
+        expect(b.height, `${name} height`).toBeGreaterThan(40);
+        expect(b.left, `${name} left`).toBeGreaterThanOrEqual(0);
+        expect(b.right, `${name} right`).toBeLessThanOrEqual(width);
+        // Whole once scrolled to: nothing cut off by a box that cannot scroll.
+        expect(b.top, `${name} top`).toBeGreaterThanOrEqual(0);
+        expect(b.bottom, `${name} bottom`).toBeLessThanOrEqual(height + 1); // the header's height may end on a fraction of a pixel
+      }
+      // The wide rejected row scrolls inside its own box.
+      const rejects = await box(page, 'dg-rejects-panel .scroll');
+      expect(rejects.right).toBeLessThanOrEqual(width);
+      // The latitude panel's figure (what its SVG and PNG exports draw): every piece of text,
+      // measured by the browser's own fonts, lies inside the figure's bounds.
+      const outside = await page.locator('dg-latitude-panel').evaluate((el) => {
+        const text = (el as unknown as { toSvg(): string }).toSvg();
+        const holder = document.createElement('div');
+        holder.style.cssText = 'position: absolute; left: 0; top: 0;';
+        holder.innerHTML = text;
+        document.body.append(holder);
+        const svg = holder.querySelector('svg');
+        const width = Number(svg?.getAttribute('width')), height = Number(svg?.getAttribute('height'));
+        const out = [...holder.querySelectorAll('text')].filter((t) => {
+          const b = t.getBBox();
+          return b.x < 0 || b.y < 0 || b.x + b.width > width || b.y + b.height > height;
+        }).map((t) => t.textContent ?? '');
+        holder.remove();
+        return { out, count: holder.querySelectorAll('text').length };
+      });
+      expect(outside.count).toBeGreaterThan(10);
+      expect(outside.out, 'latitude figure text outside its bounds').toEqual([]);
+      await page.evaluate(() => window.scrollTo(0, 0));
+      await page.locator('dg-app main').evaluate((el) => el.scrollTo(0, 0));
+      saveScreenshot(`layout-${width}x${height}`, await page.screenshot({ fullPage: true }));
+    } finally {
+      await opened.close();
+    }
+  });
+});
+
+describe('the keyboard right after an import', () => {
+  test('an arrow key pressed as soon as the table is read moves the slice', async () => {
+    const opened = await openPage(browser, app.url);
+    const { page } = opened;
+    try {
+      await waitReady(page);
+      await importLongReject(page);
+      const name = async () => (await page.locator('dg-slice-summary [data-field="name"]').textContent())?.trim() ?? '';
+      const first = await name();
+      await page.keyboard.press('ArrowRight');
+      await expect.poll(name, { timeout: 2_000 }).not.toBe(first);
+      const second = await name();
+      await page.keyboard.press('ArrowLeft');
+      await expect.poll(name, { timeout: 2_000 }).toBe(first);
+      expect(second).not.toBe(first);
+    } finally {
+      await opened.close();
+    }
+  });
+});
