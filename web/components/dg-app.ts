@@ -129,9 +129,8 @@ export class DgApp extends LitElement {
     const target = figure === 'curves' ? this.curves.value : figure === 'latitude' ? this.latitude.value : this.equalArea.value;
     try {
       if (figure === 'map' && target === undefined) {
-        // The WebGL map exports what it shows as PNG; SVG figures come from the equal-area view.
+        // The WebGL map exports what it shows as PNG; its SVG button is disabled, with the reason.
         if (format === 'png' && this.globe.value !== undefined) download(await this.globe.value.snapshotPng(), name, 'image/png');
-        else this.store.update({ problem: 'Map figures as SVG come from the equal-area views: choose Equal Earth or a polar view under Display, then export.' });
         return;
       }
       if (target === undefined) return;
