@@ -112,6 +112,15 @@ describe('legend words', () => {
   it('ends on the largest count, placed at the top of the ramp', () => {
     const ticks = legendTicks(countScale(4321));
     expect(ticks.at(-1)).toEqual({ value: 4321, position: 1, label: '4,321' });
-    expect(ticks.at(-2)!.position).toBeCloseTo(Math.log(1000) / Math.log(4321), 12);
+    // 1,000 (at 83 % of the ramp) would run into 4,321 and is left out.
+    expect(ticks.at(-2)!.position).toBeCloseTo(Math.log(100) / Math.log(4321), 12);
+  });
+
+  it('leaves out a decade whose label would run into the largest count’s', () => {
+    // 100 sits at log 100 / log 122 ≈ 0.96 of the ramp, a few pixels from 122.
+    expect(legendTicks(countScale(122)).map((t) => t.label)).toEqual(['1', '10', '122']);
+    expect(legendTicks(countScale(1100)).map((t) => t.label)).toEqual(['1', '10', '100', '1,100']);
+    // Far enough apart, both stay.
+    expect(legendTicks(countScale(900)).map((t) => t.label)).toEqual(['1', '10', '100', '900']);
   });
 });
