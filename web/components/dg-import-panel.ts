@@ -7,6 +7,7 @@ import { POLE_TABLE_COLUMNS } from '../../src/rotation';
 import { BIN_COLUMNS } from '../../src/time';
 import type { ExtraRole } from '../protocol';
 import type { AppState } from '../state/app-state';
+import { countWords } from '../text';
 import { panelStyles } from './shared-styles';
 import { WorkbenchPanel } from './workbench-panel';
 
@@ -81,7 +82,7 @@ export class DgImportPanel extends WorkbenchPanel {
       <label>Occurrence table
         <input type="file" name="occurrences" accept=".csv,.tsv,.txt" @change=${(e: Event) => this.picked(e, (f) => void this.actions?.pickTable(f))}>
       </label>
-      ${table === undefined ? nothing : html`<div class="loaded" data-field="table-summary">${table.name}: ${table.rowsRead.toLocaleString('en')} rows read,
+      ${table === undefined ? nothing : html`<div class="loaded" data-field="table-summary">${table.name}: ${countWords(table.rowsRead, 'row')} read,
         ${table.accepted.toLocaleString('en')} accepted, ${table.rejects.length.toLocaleString('en')} rejected</div>`}
       ${state.pendingImport === undefined ? nothing : this.renderMapping(state.pendingImport)}
       <details>
