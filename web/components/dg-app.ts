@@ -77,7 +77,8 @@ export class DgApp extends LitElement {
     @media (max-width: 1199px) {
       :host { height: auto; min-height: 100vh; }
       .layout { grid-template-columns: 17rem minmax(0, 1fr); }
-      main { overflow: visible; }
+      /* The page's height is its content's: the map gets a fixed share of the window, not what the left column's length leaves. */
+      main { overflow: visible; align-self: start; grid-template-rows: auto auto max(20rem, 55vh) auto auto; }
       .side { grid-column: 1 / -1; display: grid; grid-template-columns: repeat(auto-fit, minmax(16rem, 1fr)); align-items: start; overflow: visible; border-left: none; border-top: 1px solid #dde3e8; }
     }
     /* Fixed rows: the message bar comes and goes without moving the others. */
