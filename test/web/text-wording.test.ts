@@ -72,14 +72,14 @@ describe('cell words', () => {
   });
 
   it('gives a cell centre latitude first, each coordinate with its hemisphere letter', () => {
-    expect(cellCentre(12.34, -45.61)).toBe('centre 12.3° N, 45.6° W');
-    expect(cellCentre(-33.96, 151.18)).toBe('centre 34.0° S, 151.2° E');
+    expect(cellCentre(12.34, -45.61)).toBe('centre: latitude 12.3° N, longitude 45.6° W');
+    expect(cellCentre(-33.96, 151.18)).toBe('centre: latitude 34.0° S, longitude 151.2° E');
   });
 
   it('writes no hemisphere where a coordinate rounds to the equator, the prime meridian or the antimeridian', () => {
-    expect(cellCentre(0.04, -0.04)).toBe('centre 0.0°, 0.0°');
-    expect(cellCentre(-89.99, 179.99)).toBe('centre 90.0° S, 180.0°');
-    expect(cellCentre(45, -180)).toBe('centre 45.0° N, 180.0°');
+    expect(cellCentre(0.04, -0.04)).toBe('centre: latitude 0.0°, longitude 0.0°');
+    expect(cellCentre(-89.99, 179.99)).toBe('centre: latitude 90.0° S, longitude 180.0°');
+    expect(cellCentre(45, -180)).toBe('centre: latitude 45.0° N, longitude 180.0°');
   });
 });
 
@@ -112,6 +112,15 @@ describe('legend words', () => {
   it('ends on the largest count, placed at the top of the ramp', () => {
     const ticks = legendTicks(countScale(4321));
     expect(ticks.at(-1)).toEqual({ value: 4321, position: 1, label: '4,321' });
-    expect(ticks.at(-2)!.position).toBeCloseTo(Math.log(1000) / Math.log(4321), 12);
+    // 1,000 (at 83 % of the ramp) would run into 4,321 and is left out.
+    expect(ticks.at(-2)!.position).toBeCloseTo(Math.log(100) / Math.log(4321), 12);
+  });
+
+  it('leaves out a decade whose label would run into the largest count’s', () => {
+    // 100 sits at log 100 / log 122 ≈ 0.96 of the ramp, a few pixels from 122.
+    expect(legendTicks(countScale(122)).map((t) => t.label)).toEqual(['1', '10', '122']);
+    expect(legendTicks(countScale(1100)).map((t) => t.label)).toEqual(['1', '10', '100', '1,100']);
+    // Far enough apart, both stay.
+    expect(legendTicks(countScale(900)).map((t) => t.label)).toEqual(['1', '10', '100', '900']);
   });
 });

@@ -43,7 +43,7 @@ describe('the time strip', () => {
     expect(slider?.getAttribute('aria-valuemin')).toBe('2');
     expect(slider?.getAttribute('aria-valuemax')).toBe('4');
     expect(slider?.getAttribute('aria-valuenow')).toBe('3');
-    expect(slider?.getAttribute('aria-valuetext')).toBe('c, 100–95 Ma, slice 3 of 5');
+    expect(slider?.getAttribute('aria-valuetext')).toBe('c, 100–95 Ma, slice 2 of 3 shown (3 of 5 in the scale)');
     expect(element.shadowRoot?.querySelectorAll('svg rect').length).toBe(3 + 1); // three slices and the marker
   });
 

@@ -19,6 +19,8 @@ export interface Figure {
 export const CURVES_TITLE = 'Footprint through time';
 export const LATITUDE_TITLE = 'Occurrences by palaeolatitude';
 const EMPTY_HEIGHT = 40;
+/** The latitude figure is never narrower than this, CSS px: room for its title and its axis labels whatever the panel's width. */
+const LATITUDE_MIN_WIDTH = 400;
 
 function empty(title: string, width: number): Figure {
   return { text: svgDocument({ width, height: EMPTY_HEIGHT, title, description: 'No analysis yet.', marks: [] }), width, height: EMPTY_HEIGHT };
@@ -42,7 +44,8 @@ export function curvesFigure(
 }
 
 /** The latitude panel of one slice as a figure. */
-export function latitudeFigure(view: AnalysisView | undefined, slice: number, width: number): Figure {
+export function latitudeFigure(view: AnalysisView | undefined, slice: number, panelWidth: number): Figure {
+  const width = Math.max(panelWidth, LATITUDE_MIN_WIDTH);
   if (view === undefined || view.slices.length === 0 || view.latitude.bands === 0) return empty(LATITUDE_TITLE, width);
   const s = clampSlice(view, slice);
   const metrics = view.slices[s];

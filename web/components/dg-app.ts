@@ -66,10 +66,21 @@ export class DgApp extends LitElement {
     header .busy { display: flex; align-items: center; gap: 0.5rem; font-size: 0.85em; }
     header progress { width: 12rem; }
     header button { background: #fff; color: #14324a; }
-    .layout { display: grid; grid-template-columns: 19rem 1fr 22rem; min-height: 0; }
-    aside, .side { overflow: auto; padding: 0.6rem 0.8rem; display: flex; flex-direction: column; gap: 0.9rem; background: #fbfcfd; border-right: 1px solid #dde3e8; }
+    /* minmax(0, …) columns: a wide table (the rejects' original rows) scrolls in its own box
+       instead of widening the column past the window. */
+    .layout { display: grid; grid-template-columns: 19rem minmax(0, 1fr) 22rem; min-height: 0; }
+    aside, .side { overflow: auto; scrollbar-gutter: stable; padding: 0.6rem 0.8rem; display: flex; flex-direction: column; gap: 0.9rem; background: #fbfcfd; border-right: 1px solid #dde3e8; }
     .side { border-right: none; border-left: 1px solid #dde3e8; }
-    main { display: grid; grid-template-rows: auto auto minmax(26rem, 1fr) auto auto; min-width: 0; min-height: 0; overflow: auto; }
+    main { display: grid; grid-template-columns: minmax(0, 1fr); grid-template-rows: auto auto minmax(max(20rem, 50vh), 1fr) auto auto; min-width: 0; min-height: 0; overflow: auto; }
+    main > * { min-width: 0; }
+    /* Narrow windows: the page scrolls as a whole, the current slice's panels go below the map. */
+    @media (max-width: 1199px) {
+      :host { height: auto; min-height: 100vh; }
+      .layout { grid-template-columns: 17rem minmax(0, 1fr); }
+      /* The page's height is its content's: the map gets a fixed share of the window, not what the left column's length leaves. */
+      main { overflow: visible; align-self: start; grid-template-rows: auto auto max(20rem, 55vh) auto auto; }
+      .side { grid-column: 1 / -1; display: grid; grid-template-columns: repeat(auto-fit, minmax(16rem, 1fr)); align-items: start; overflow: visible; border-left: none; border-top: 1px solid #dde3e8; }
+    }
     /* Fixed rows: the message bar comes and goes without moving the others. */
     .problem-bar { grid-row: 1; } .strip { grid-row: 2; } .map { grid-row: 3; } dg-curves-panel { grid-row: 4; } .below { grid-row: 5; }
     .strip { padding: 0.4rem 0.8rem; border-bottom: 1px solid #dde3e8; background: #fff; }
@@ -119,9 +130,8 @@ export class DgApp extends LitElement {
     const target = figure === 'curves' ? this.curves.value : figure === 'latitude' ? this.latitude.value : this.equalArea.value;
     try {
       if (figure === 'map' && target === undefined) {
-        // The WebGL map exports what it shows as PNG; SVG figures come from the equal-area view.
+        // The WebGL map exports what it shows as PNG; its SVG button is disabled, with the reason.
         if (format === 'png' && this.globe.value !== undefined) download(await this.globe.value.snapshotPng(), name, 'image/png');
-        else this.store.update({ problem: 'Map figures as SVG come from the equal-area views: choose Equal Earth or a polar view under Display, then export.' });
         return;
       }
       if (target === undefined) return;
@@ -172,9 +182,10 @@ export class DgApp extends LitElement {
           <div class="below"><dg-rejects-panel .state=${s} .actions=${a}></dg-rejects-panel></div>
         </main>
         <div class="side" role="complementary" aria-label="Current slice">
-          <dg-slice-summary .view=${s.view} .slice=${s.slice}></dg-slice-summary>
-          <dg-cell-details .view=${s.view} .slice=${s.slice} .cellFocus=${s.cell}></dg-cell-details>
+          <dg-slice-summary .view=${s.view} .slice=${s.slice} .range=${range}></dg-slice-summary>
           <dg-latitude-panel ${ref(this.latitude)} .view=${s.view} .slice=${s.slice}></dg-latitude-panel>
+          <!-- Last: what it lists changes as the pointer moves, and nothing else may move with it. -->
+          <dg-cell-details .view=${s.view} .slice=${s.slice} .cellFocus=${s.cell}></dg-cell-details>
         </div>
       </div>`;
   }

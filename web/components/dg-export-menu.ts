@@ -26,6 +26,8 @@ export class DgExportMenu extends WorkbenchPanel {
   override render() {
     if (this.state?.view === undefined) return nothing;
     const disabled = this.state.busy !== undefined;
+    // The WebGL maps draw no vectors to write out; the equal-area views do.
+    const noMapSvg = this.state.webgl && (this.state.mapView === 'globe' || this.state.mapView === 'flat');
     return html`
       <h2>Export</h2>
       <div class="buttons" role="group" aria-label="Result files">
@@ -33,9 +35,11 @@ export class DgExportMenu extends WorkbenchPanel {
       </div>
       <div class="buttons" role="group" aria-label="Figures of the current slice">
         ${Object.entries(FIGURE_LABELS).map(([figure, label]) => html`
-          <button data-figure="${figure}-svg" @click=${() => this.figure(figure as Figure, 'svg')}>${label} SVG</button>
+          <button data-figure="${figure}-svg" ?disabled=${figure === 'map' && noMapSvg} aria-describedby=${figure === 'map' && noMapSvg ? 'map-svg-why' : nothing}
+            @click=${() => this.figure(figure as Figure, 'svg')}>${label} SVG</button>
           <button data-figure="${figure}-png" @click=${() => this.figure(figure as Figure, 'png')}>${label} PNG</button>`)}
       </div>
+      ${noMapSvg ? html`<p class="hint" id="map-svg-why">Map SVG comes from the equal-area views: choose Equal Earth or a polar view under Display. The globe and flat map export as PNG.</p>` : nothing}
       <p class="hint">session.json records the settings and the inputs' SHA-256; open it here or pass it to the command line to repeat the run.</p>`;
   }
 }

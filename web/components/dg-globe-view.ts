@@ -17,7 +17,14 @@ import {
 import { IdleWorkController, SizeController } from '../controllers';
 import type { AnalysisView, Measure } from '../protocol';
 import { measureMax } from '../state/view-options';
-import { cellTipLines, mapDescription } from '../text';
+import { FIGURE_PAD, drawFigureFrame, figureLayout, mapLegend } from '../equal-area';
+import { cellTipLines, mapDescription, sliceTitle } from '../text';
+
+/** The line under an exported picture of the WebGL map: what projection it is in. */
+const GLOBE_CAPTIONS: Readonly<Record<GlobeProjection, string>> = {
+  globe: 'Orthographic view of the globe as shown (not equal-area; the far side is hidden)',
+  flat: 'Web Mercator map as shown (not equal-area: areas grow towards the poles)',
+};
 
 /** Slices whose layers stay loaded (hidden) after being shown, so stepping back re-uploads nothing. */
 const KEPT_SLICES = 24;
@@ -82,9 +89,21 @@ export class DgGlobeView extends SliceMapElement {
     const map = this.#map;
     if (!map) throw new Error('The WebGL map is not showing, so there is no picture to save.');
     if (!map.loaded()) await map.once('idle');
-    map.redraw();
+    // The picture inside the figure frame the equal-area maps' figures have: slice title above,
+    // count legend and a line naming the projection below.
+    const source = map.getCanvas();
+    const width = Math.max(1, source.clientWidth), height = Math.max(1, source.clientHeight);
+    const pixelRatio = source.width / width;
+    const legend = mapLegend(this.view, this.measure, this.layers.indicators);
+    const layout = figureLayout(width + 2 * FIGURE_PAD, height, legend.indicators.length > 0);
+    const canvas = Object.assign(document.createElement('canvas'), { width: Math.round(layout.width * pixelRatio), height: Math.round(layout.height * pixelRatio) });
+    const context = canvas.getContext('2d');
+    if (context === null) throw new Error('No 2D canvas is available to draw the PNG figure.');
+    drawFigureFrame(context, { layout, legend, title: sliceTitle(this.view?.slices[this.slice]), caption: GLOBE_CAPTIONS[this.projection] }, pixelRatio);
+    map.redraw(); // synchronous: the WebGL canvas holds the frame until this task ends
+    context.drawImage(source, layout.map.x0 * pixelRatio, layout.map.y0 * pixelRatio, width * pixelRatio, height * pixelRatio);
     return new Promise((resolve, reject) => {
-      map.getCanvas().toBlob((blob) => (blob ? resolve(blob) : reject(new Error('The browser could not encode the map as PNG.'))), 'image/png');
+      canvas.toBlob((blob) => (blob ? resolve(blob) : reject(new Error('The browser could not encode the map as PNG.'))), 'image/png');
     });
   }
 

@@ -10,6 +10,7 @@ export class DgRejectsPanel extends WorkbenchPanel {
 
   static override styles = [panelStyles, css`
     .scroll { max-height: 16rem; overflow: auto; }
+    td.reason { min-width: 14rem; }
     td.original { font-family: ui-monospace, monospace; white-space: pre; }
   `];
 
@@ -28,7 +29,7 @@ export class DgRejectsPanel extends WorkbenchPanel {
           <div class="scroll">
             <table aria-label="Rejected rows">
               <thead><tr><th scope="col">Line</th><th scope="col">Field</th><th scope="col">Reason</th><th scope="col">Original row</th></tr></thead>
-              <tbody>${rejects.slice(0, SHOWN_ROWS).map((r) => html`<tr><td>${r.line}</td><td>${r.field}</td><td>${r.reason}</td><td class="original">${r.original}</td></tr>`)}</tbody>
+              <tbody>${rejects.slice(0, SHOWN_ROWS).map((r) => html`<tr><td>${r.line}</td><td>${r.field}</td><td class="reason">${r.reason}</td><td class="original">${r.original}</td></tr>`)}</tbody>
             </table>
           </div>
           ${rejects.length > SHOWN_ROWS ? html`<p class="hint">First ${SHOWN_ROWS} shown; the download lists all ${rejects.length.toLocaleString('en')}.</p>` : nothing}`}

@@ -6,7 +6,8 @@
 import { LitElement, css, html, nothing } from 'lit';
 import type { AnalysisView } from '../protocol';
 import { SLICE_CAUTION, sliceCautions, type SliceCaution } from '../../src/footprint';
-import { positionWords } from '../text';
+import type { SliceRange } from '../state/slice-range';
+import { positionWords, slicePosition } from '../text';
 import { panelStyles } from './shared-styles';
 
 /** Lines of the lever's rows listed by number; the rest are counted. */
@@ -16,14 +17,17 @@ const number = (v: number, decimals = 0): string =>
   Number.isFinite(v) ? v.toLocaleString('en', { minimumFractionDigits: decimals, maximumFractionDigits: decimals }) : '—';
 
 export class DgSliceSummary extends LitElement {
-  static override properties = { view: { attribute: false }, slice: { type: Number } };
+  static override properties = { view: { attribute: false }, slice: { type: Number }, range: { attribute: false } };
   declare view: AnalysisView | undefined;
   declare slice: number;
+  /** The slices the strip shows, which the heading counts in. */
+  declare range: SliceRange | undefined;
 
   constructor() {
     super();
     this.view = undefined;
     this.slice = 0;
+    this.range = undefined;
   }
 
   static override styles = [panelStyles, css`
@@ -51,7 +55,7 @@ export class DgSliceSummary extends LitElement {
     const collections = this.view.collectionsArePositions ? 'Distinct places' : 'Collections';
     const cautions = sliceCautions(s).map(cautionText);
     return html`
-      <h2>Slice ${this.slice + 1} of ${this.view.slices.length}</h2>
+      <h2>${slicePosition(this.slice, this.range ?? { from: 0, to: this.view.slices.length - 1 }, this.view.slices.length)}</h2>
       <p><strong data-field="name">${s.name}</strong> <span class="hint">${s.baseMa}–${s.topMa} Ma</span></p>
       <dl>
         <dt>Occurrences</dt><dd data-field="occurrences">${number(s.occurrences)}</dd>

@@ -7,13 +7,16 @@ import { LitElement, css, html, svg, type SVGTemplateResult } from 'lit';
 import type { SliceMetrics } from '../../src/analysis';
 import { SizeController } from '../controllers';
 import type { SliceRange } from '../state/slice-range';
-import { ageRange, sliceTitle } from '../text';
+import { ageRange, slicePosition, sliceTitle } from '../text';
 import { panelStyles } from './shared-styles';
 
 /** Muted tints for alternating chart periods (ours; labels carry the names, colour only separates). */
 const PERIOD_TINTS = ['#d9e4ec', '#e9e1d2', '#dfe8d8', '#e8dbe4', '#d8e6e4', '#ece6d0'];
 const PLAY_STEP_MS = 700;
 const HEIGHT = 46;
+/** Period labels: 10 px text, a generous average glyph width so that no two can touch, and the least gap between them, CSS px. */
+const labelWidth = (name: string): number => name.length * 6.5;
+const LABEL_GAP = 6;
 /** Least width the strip is drawn at, CSS px. */
 const MIN_WIDTH = 100;
 
@@ -42,8 +45,9 @@ export class DgTimeStrip extends LitElement {
   }
 
   static override styles = [panelStyles, css`
-    .row { display: flex; gap: 0.5rem; align-items: center; }
-    .strip { flex: 1; height: ${HEIGHT}px; touch-action: none; cursor: pointer; border-radius: 3px; }
+    /* Wraps rather than squeezing the strip to nothing in a narrow column. */
+    .row { display: flex; flex-wrap: wrap; gap: 0.5rem; align-items: center; }
+    .strip { flex: 1 1 12rem; min-width: 12rem; height: ${HEIGHT}px; touch-action: none; cursor: pointer; border-radius: 3px; }
     svg { width: 100%; height: 100%; display: block; }
     .current { font-weight: 600; min-width: 16rem; }
     text { font-size: 10px; fill: #3a444d; pointer-events: none; }
@@ -119,7 +123,7 @@ export class DgTimeStrip extends LitElement {
     const x = (ma: number) => ((old - ma) / (old - young || 1)) * w;
     const periodIndex = new Map<string, number>();
     for (const p of this.periods) if (!periodIndex.has(p)) periodIndex.set(p, periodIndex.size);
-    const valueText = current === undefined ? 'no slices' : `${sliceTitle(current)}, slice ${this.slice + 1} of ${n}`;
+    const valueText = current === undefined ? 'no slices' : `${sliceTitle(current)}, ${slicePosition(this.slice, this.range, n)}`;
     return html`
       <div class="row">
         <button @click=${this.togglePlay} aria-label=${this.playing ? 'Stop stepping through slices' : 'Play: step through slices'}>${this.playing ? '■ Stop' : '▶ Play'}</button>
@@ -146,11 +150,17 @@ export class DgTimeStrip extends LitElement {
   private periodLabels(x: (ma: number) => number) {
     const labels: SVGTemplateResult[] = [];
     if (this.slices.length === 0) return labels;
+    let clearFrom = 0;
     for (let k = this.range.from; k <= this.range.to;) {
       let end = k;
       while (end + 1 <= this.range.to && this.periods[end + 1] === this.periods[k]) end++;
       const from = x(this.slices[k].baseMa), to = x(this.slices[end].topMa);
-      if (to - from > 40 && this.periods[k] !== '') labels.push(svg`<text x=${(from + to) / 2} y="10" text-anchor="middle">${this.periods[k]}</text>`);
+      const name = this.periods[k], centre = (from + to) / 2, half = labelWidth(name) / 2;
+      // Only where the name fits over its own period and clear of the label before it.
+      if (name !== '' && to - from >= 2 * half && centre - half >= clearFrom) {
+        labels.push(svg`<text x=${centre} y="10" text-anchor="middle">${name}</text>`);
+        clearFrom = centre + half + LABEL_GAP;
+      }
       k = end + 1;
     }
     return labels;

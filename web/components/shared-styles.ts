@@ -8,6 +8,7 @@ export const panelStyles = css`
   select, input[type='number'], input[type='text'], button {
     font: inherit; padding: 0.2rem 0.4rem; border: 1px solid #9aa5b0; border-radius: 4px; background: #fff; color: inherit;
   }
+  select { max-width: 100%; }
   button { cursor: pointer; }
   button:hover { background: #eef2f5; }
   :focus-visible { outline: 2px solid #0b5cad; outline-offset: 1px; }

@@ -20,6 +20,21 @@ export interface FigureDrawing {
 }
 
 export function drawFigure(ctx: Canvas2D, projected: ProjectedView, figure: FigureDrawing, pixelRatio: number): void {
+  drawFigureFrame(ctx, { ...figure, caption: PROJECTION_CAPTIONS[figure.projection] }, pixelRatio);
+  const { x0, y0, x1, y1 } = figure.layout.map;
+  drawMap(ctx, projected, figure.picture, fitFrame(projected.reference, x0, y0, x1, y1), pixelRatio, new DotRaster());
+}
+
+/** What surrounds any map in a figure: the title, the count legend and the caption at the foot. */
+export interface FigureFrame {
+  readonly layout: FigureLayout;
+  readonly legend: MapLegend;
+  readonly title: string;
+  readonly caption: string;
+}
+
+/** Draws a figure's background, title, legend and caption, leaving layout.map for the map. */
+export function drawFigureFrame(ctx: Canvas2D, figure: FigureFrame, pixelRatio: number): void {
   const { layout, legend } = figure;
   ctx.save();
   ctx.setTransform(pixelRatio, 0, 0, pixelRatio, 0, 0);
@@ -28,13 +43,6 @@ export function drawFigure(ctx: Canvas2D, projected: ProjectedView, figure: Figu
   ctx.fillStyle = 'rgb(29, 35, 40)';
   ctx.font = `600 ${TITLE_SIZE}px ${FIGURE_FONT}`;
   ctx.fillText(figure.title, layout.map.x0, layout.titleY);
-  ctx.restore();
-
-  const { x0, y0, x1, y1 } = layout.map;
-  drawMap(ctx, projected, figure.picture, fitFrame(projected.reference, x0, y0, x1, y1), pixelRatio, new DotRaster());
-
-  ctx.save();
-  ctx.setTransform(pixelRatio, 0, 0, pixelRatio, 0, 0);
   ctx.font = `${TEXT_SIZE}px ${FIGURE_FONT}`;
   ctx.fillStyle = 'rgb(29, 35, 40)';
   const { ramp } = layout;
@@ -73,6 +81,6 @@ export function drawFigure(ctx: Canvas2D, projected: ProjectedView, figure: Figu
     });
   }
   ctx.fillStyle = 'rgb(60, 66, 72)';
-  ctx.fillText(PROJECTION_CAPTIONS[figure.projection], x0, layout.captionY);
+  ctx.fillText(figure.caption, layout.map.x0, layout.captionY);
   ctx.restore();
 }

@@ -1,7 +1,7 @@
 export { CellLookup } from './cell-lookup';
 export { cellPolygon, polygonEdges, rewindForD3, slicePaths } from './d3-geometry';
 export { DotRaster } from './dot-raster';
-export { drawFigure, type FigureDrawing } from './draw-figure';
+export { drawFigure, drawFigureFrame, type FigureDrawing, type FigureFrame } from './draw-figure';
 export { drawMap, type Canvas2D, type MapPicture } from './draw-map';
 export { escapeXml } from './escape-xml';
 export { figurePng } from './figure-png';

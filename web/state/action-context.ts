@@ -2,6 +2,7 @@
  * What every job of the workbench's actions shares: the store, the worker, one busy notice
  * owned by the latest piece of work, analyses where the latest call wins, and the address.
  */
+import type { SliceMetrics } from '../../src/analysis';
 import type { RunSettings } from '../../src/run';
 import type { AppState } from './app-state';
 import { matchingSlice, sliceNamed } from './slice-matching';
@@ -23,6 +24,12 @@ export class ActionContext {
   private analysisCall: AbortController | undefined;
   /** Number of the latest work that set the busy notice; only it clears the notice. */
   private busyOwner = 0;
+  /**
+   * While work that ends in a new analysis runs, the slice the user was on and the arrow steps
+   * taken since: the steps count on the new slices too, even those the old ones had no room for
+   * (the old strip may end where the new table goes on).
+   */
+  private stepsFrom: { slice: SliceMetrics | undefined; steps: number } | undefined;
 
   constructor(readonly store: Store<AppState>, readonly client: WorkerClient) {}
 
@@ -47,9 +54,11 @@ export class ActionContext {
     }
     if (call.signal.aborted) throw new SupersededError();
     const { view } = answer;
-    const previous = this.state.view?.slices[this.state.slice];
+    const tracked = this.stepsFrom;
+    this.stepsFrom = undefined;
+    const previous = tracked === undefined ? this.state.view?.slices[this.state.slice] : tracked.slice;
     const named = sliceName === undefined ? undefined : sliceNamed(view.slices, sliceName);
-    const wanted = named ?? (previous === undefined ? 0 : matchingSlice(view.slices, previous));
+    const wanted = named ?? (previous === undefined ? 0 : matchingSlice(view.slices, previous)) + (tracked?.steps ?? 0);
     const { from, to } = shownSlices(view.slices, this.state.wholeScale);
     this.store.update({ view, settings, slice: Math.min(to, Math.max(from, wanted)), cell: undefined });
     this.syncUrl();
@@ -62,6 +71,7 @@ export class ActionContext {
    */
   async run(label: string, work: () => Promise<void>): Promise<boolean> {
     const owner = ++this.busyOwner;
+    this.stepsFrom = { slice: this.state.view?.slices[this.state.slice], steps: 0 };
     this.store.update({ busy: { label, fraction: undefined }, problem: undefined });
     try {
       await work();
@@ -72,8 +82,18 @@ export class ActionContext {
       }
       return false;
     } finally {
-      if (owner === this.busyOwner) this.store.update({ busy: undefined });
+      if (owner === this.busyOwner) {
+        this.store.update({ busy: undefined });
+        this.stepsFrom = undefined;
+      }
     }
+  }
+
+  /** An arrow step (`delta`) or, with no delta, a jump to the slice now current. */
+  noteSliceMove(delta?: number): void {
+    if (this.stepsFrom === undefined) return;
+    if (delta === undefined) this.stepsFrom = { slice: this.state.view?.slices[this.state.slice], steps: 0 };
+    else this.stepsFrom.steps += delta;
   }
 
   syncUrl(): void {

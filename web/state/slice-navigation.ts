@@ -7,6 +7,17 @@ export class SliceNavigation {
 
   /** Moves to a slice, kept within the slices shown. */
   setSlice(slice: number): void {
+    this.moveTo(slice);
+    this.context.noteSliceMove();
+  }
+
+  /** One slice older (−1) or younger (+1); counted on the new slices when an analysis is on its way. */
+  stepSlice(delta: number): void {
+    this.moveTo(this.context.state.slice + delta);
+    this.context.noteSliceMove(delta);
+  }
+
+  private moveTo(slice: number): void {
     const { state, store } = this.context;
     const view = state.view;
     if (view === undefined || view.slices.length === 0) return;
@@ -15,10 +26,6 @@ export class SliceNavigation {
     if (next === state.slice) return;
     store.update({ slice: next, cell: undefined });
     this.context.syncUrl();
-  }
-
-  stepSlice(delta: number): void {
-    this.setSlice(this.context.state.slice + delta);
   }
 
   /** First (−1) or last (+1) slice shown. */

@@ -34,7 +34,7 @@ export function positionWords(latDeg: number, lonDeg: number): string {
   return `${coordinate(latDeg, 'N', 'S')}, ${coordinate(lonDeg, 'E', 'W')}`;
 }
 
-/** "centre 12.3° N, 45.6° W". */
+/** "centre: latitude 12.3° N, longitude 45.6° W", each number named (a bare pair reads either way). */
 export function cellCentre(latDeg: number, lonDeg: number): string {
-  return `centre ${positionWords(latDeg, lonDeg)}`;
+  return `centre: latitude ${coordinate(latDeg, 'N', 'S')}, longitude ${coordinate(lonDeg, 'E', 'W')}`;
 }

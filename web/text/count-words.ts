@@ -10,6 +10,12 @@ export const COUNT_NOUNS = {
   taxon: ['taxon', 'taxa'],
   cell: ['occupied cell', 'occupied cells'],
   slice: ['slice', 'slices'],
+  row: ['row', 'rows'],
+  pole: ['pole', 'poles'],
+  bin: ['bin', 'bins'],
+  polygon: ['polygon', 'polygons'],
+  site: ['site', 'sites'],
+  kind: ['kind', 'kinds'],
 } as const;
 
 export type CountNoun = keyof typeof COUNT_NOUNS;

@@ -2,4 +2,4 @@ export { cellCentre, cellCounts, cellName, cellTipLines, positionWords } from '.
 export { COUNT_NOUNS, collectionNoun, countWords, formatCount, type CountNoun } from './count-words';
 export { legendTicks, legendTitle, type LegendTick } from './legend-words';
 export { mapDescription } from './map-description';
-export { ageRange, sliceTitle } from './slice-title';
+export { ageRange, slicePosition, sliceTitle } from './slice-title';

@@ -18,3 +18,13 @@ export function sliceTitle(slice: SliceName | undefined): string {
   const range = ageRange(slice);
   return slice.name === range ? range : `${slice.name}, ${range}`;
 }
+
+/**
+ * Where the slice is among those shown, 0-based `slice` within `range` of `total`: "slice 8 of
+ * 20", and when the strip shows part of the scale "slice 8 of 20 shown (58 of 102 in the scale)".
+ */
+export function slicePosition(slice: number, range: { readonly from: number; readonly to: number }, total: number): string {
+  const shown = range.to - range.from + 1;
+  const own = `slice ${slice - range.from + 1} of ${shown}`;
+  return shown === total ? own : `${own} shown (${slice + 1} of ${total} in the scale)`;
+}

@@ -5,6 +5,7 @@ import { readRecords } from '../../src/run';
 import { createOccurrenceReader, type OccurrenceReadResult } from '../../src/table';
 import { binsFromRecords, findChartInterval, type TimeScale } from '../../src/time';
 import type { ExtraRole, ExtraSummary, Source } from '../protocol';
+import { countWords } from '../text';
 import { blobText, sha256Hex, sourceBlob, sourceName, streamText } from './stream-source';
 
 export interface LoadedTable {
@@ -65,12 +66,12 @@ async function parseExtra(role: ExtraRole, blob: Blob, name: string): Promise<{ 
     case 'rotation': {
       const { header, records } = await readRecords(blobText(blob));
       const poles = poleTableFromRecords(header, records, name);
-      return { input: { role, poles }, description: `${records.length} poles` };
+      return { input: { role, poles }, description: countWords(records.length, 'pole') };
     }
     case 'bins': {
       const { header, records } = await readRecords(blobText(blob));
       const scale = binsFromRecords(header, records, name);
-      return { input: { role, scale }, description: `${scale.names.length} bins, ${scale.baseMa[0]}–${scale.topMa[scale.names.length - 1]} Ma` };
+      return { input: { role, scale }, description: `${countWords(scale.names.length, 'bin')}, ${scale.baseMa[0]}–${scale.topMa[scale.names.length - 1]} Ma` };
     }
     case 'polygons': {
       let root: unknown;
@@ -80,7 +81,7 @@ async function parseExtra(role: ExtraRole, blob: Blob, name: string): Promise<{ 
         throw new Error(`not a UTF-8 JSON file (${error instanceof Error ? error.message : String(error)}); expected a GeoJSON FeatureCollection`);
       }
       const { features } = plateFeaturesOf(root, name);
-      return { input: { role, features }, description: `${features.length} polygons` };
+      return { input: { role, features }, description: countWords(features.length, 'polygon') };
     }
     case 'indicators': {
       // Indicator tables name a kind where occurrence tables name a taxon.
@@ -88,7 +89,7 @@ async function parseExtra(role: ExtraRole, blob: Blob, name: string): Promise<{ 
       await blobText(blob)((text) => reader.push(text));
       const read = reader.end();
       const rejected = read.rejects.length === 0 ? '' : `, ${read.rejects.length} rejected (first: line ${read.rejects[0].line}, ${read.rejects[0].field}: ${read.rejects[0].reason})`;
-      return { input: { role, read }, description: `${read.table.count} sites of ${read.table.taxon.values.length} kinds${rejected}` };
+      return { input: { role, read }, description: `${countWords(read.table.count, 'site')} of ${countWords(read.table.taxon.values.length, 'kind')}${rejected}` };
     }
   }
 }
