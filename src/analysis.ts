@@ -6,6 +6,7 @@ import type { EqualAreaGrid } from './grid';
 import {
   DEFAULT_PLACEMENT, collectExclusions, placeOccurrences, type Exclusions, type Placement, type PlacementSettings,
 } from './placement';
+import { pointsInSphericalPolygons, type SphericalPolygons } from './gaps';
 import type { RotationModel } from './rotation';
 import type { OccurrenceTable } from './table';
 import { assignSlices, type AssignRule, type TimeScale } from './time';
@@ -19,6 +20,8 @@ export interface AnalysisSettings {
   readonly rotation?: RotationModel;
   /** How rows are placed (see placeOccurrences); DEFAULT_PLACEMENT when absent. */
   readonly placement?: PlacementSettings;
+  /** A fixed region: rows placed outside it are left out of every slice and counted, not excluded. */
+  readonly within?: SphericalPolygons;
 }
 
 /** Per-slice results, one entry per slice of the scale, oldest first. */
@@ -44,6 +47,8 @@ export interface AnalysisResult {
   /** Where each row's palaeoposition came from, or why it has none. */
   readonly placement: Placement;
   readonly exclusions: Exclusions;
+  /** Rows placed outside the fixed region (settings.within), left out of every slice; 0 without a region. */
+  readonly outsideRegion: number;
   /** True when `collections` counts distinct positions because the table has no collection ids. */
   readonly collectionsArePositions: boolean;
   /** Per slice, the distinct palaeopositions (degrees) the footprint was measured over. */
@@ -67,15 +72,46 @@ export interface SliceRows {
   readonly cell: Uint32Array;
 }
 
-/** The whole computation from accepted occurrences to per-slice footprint and gridded coverage. */
-export function analyse(table: OccurrenceTable, settings: AnalysisSettings): AnalysisResult {
-  const { scale, rule, grid } = settings;
+/** Where the rows of a table go: their slices and palaeopositions, and which were left out and why. */
+export interface PlacedRows {
+  /** Slice of each row, −1 where excluded or outside the fixed region. */
+  readonly sliceOfRow: Int32Array;
+  readonly placement: Placement;
+  readonly exclusions: Exclusions;
+  readonly outsideRegion: number;
+}
+
+/**
+ * Bins and places the rows of a table (occurrences, or indicator sites: one path for both),
+ * then leaves out the rows placed outside the fixed region, if any.
+ */
+export function placeRows(table: OccurrenceTable, settings: AnalysisSettings): PlacedRows {
+  const { scale, rule } = settings;
   const assignment = assignSlices(table.oldestMa, table.youngestMa, scale, rule);
   const placement = placeOccurrences(table, assignment, scale, settings.rotation, settings.placement ?? DEFAULT_PLACEMENT);
   const sliceOfRow = assignment.slice; // fresh from assignSlices: ours to mark exclusions in
-  const { lat: palaeoLat, lon: palaeoLon } = placement;
-
   const exclusions = collectExclusions(assignment, placement, sliceOfRow);
+  let outsideRegion = 0;
+  if (settings.within !== undefined) {
+    const placed: number[] = [];
+    for (let i = 0; i < sliceOfRow.length; i++) if (sliceOfRow[i] >= 0) placed.push(i);
+    const lat = Float64Array.from(placed, (i) => placement.lat[i]), lon = Float64Array.from(placed, (i) => placement.lon[i]);
+    const inside = pointsInSphericalPolygons(settings.within, lat, lon, new Uint8Array(placed.length));
+    placed.forEach((i, k) => {
+      if (inside[k] === 0) {
+        sliceOfRow[i] = -1;
+        outsideRegion++;
+      }
+    });
+  }
+  return { sliceOfRow, placement, exclusions, outsideRegion };
+}
+
+/** The whole computation from accepted occurrences to per-slice footprint and gridded coverage. */
+export function analyse(table: OccurrenceTable, settings: AnalysisSettings): AnalysisResult {
+  const { scale, grid } = settings;
+  const { sliceOfRow, placement, exclusions, outsideRegion } = placeRows(table, settings);
+  const { lat: palaeoLat, lon: palaeoLon } = placement;
 
   const sliceCount = scale.names.length;
   const { order, start } = groupBySlice(sliceOfRow, sliceCount);
@@ -133,6 +169,7 @@ export function analyse(table: OccurrenceTable, settings: AnalysisSettings): Ana
     palaeoLon,
     placement,
     exclusions,
+    outsideRegion,
     collectionsArePositions,
     places: { lat: places.lat, lon: places.lon },
     shapes,

@@ -9,11 +9,11 @@ import { writeExports } from './write-results';
 export async function runCoverage(args: readonly string[]): Promise<number> {
   const started = performance.now();
   const options = await resolveSession(parseCoverageOptions(args));
-  const { run, read, model, inputs, inputPaths } = await readRun(options);
+  const { run, read, inputs, inputPaths } = await readRun(options);
   const written = await writeExports(options.out, { run, read, inputs, tableText: fileText(options.input as string) }, inputPaths);
   if (!options.quiet) {
     printSummary({
-      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model, loneOldest: run.loneOldest, written,
+      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model: run.model, loneOldest: run.loneOldest, written,
       elapsedMs: performance.now() - started,
     });
   }

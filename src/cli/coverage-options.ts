@@ -9,6 +9,11 @@ export interface CoverageOptions {
   readonly binsFile: string | undefined;
   /** Pole table of the rotation model. */
   readonly rotation: string | undefined;
+  /** The fixed region (`--within`). */
+  readonly withinFile: string | undefined;
+  /** gaps only: the area polygons (`--area <file>`) and the indicator table. */
+  readonly areaFile: string | undefined;
+  readonly indicators: string | undefined;
   readonly out: string;
   readonly session: string | undefined;
   readonly quiet: boolean;
@@ -20,16 +25,17 @@ export const DEFAULT_OUT = 'results';
 /** Options that a session file fixes; giving them beside --session would be ambiguous. */
 const SESSION_FIXED = [
   'bins', 'assign', 'seed', 'grid', 'map', 'rotation', 'rotate-at', 'prefer-model', 'beyond-model',
-  'quorum', 'trials', 'rarefy', 'age-trials', 'region-km',
+  'quorum', 'trials', 'rarefy', 'age-trials', 'region-km', 'within',
 ] as const;
 /** Options that only mean something with a rotation model. */
-const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
+export const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
 
 const COVERAGE_OPTIONS = {
   ...SHARED_OPTIONS,
   grid: { type: 'string' },
   'prefer-model': { type: 'boolean' },
   session: { type: 'string' },
+  within: { type: 'string' },
 } as const satisfies NonNullable<ParseArgsConfig['options']>;
 
 /** `curves` reads what `coverage` reads, and how richness is standardised. */
@@ -71,6 +77,7 @@ export function parseCoverageOptions(args: readonly string[], command: 'coverage
     input: positionals[0],
     ...settingsFromOptions(values),
     rotation: values.rotation,
+    indicators: undefined,
     out: values.out ?? DEFAULT_OUT,
     session: values.session,
     quiet: values.quiet ?? false,

@@ -15,16 +15,20 @@ export async function resolveSession(options: CoverageOptions): Promise<Coverage
     await checkUnchanged(path, input);
     return path;
   };
-  const { occurrences, bins, rotation } = session.inputs;
-  if (settings.bins.kind === 'file' && bins === undefined) {
-    throw new Error(`${options.session}: settings.bins is "file" but inputs.bins records no bins table.`);
-  }
+  const { occurrences, bins, rotation, area, within, indicators } = session.inputs;
+  const lacking = (setting: string, input: string) => new Error(`${options.session}: settings.${setting} but inputs.${input} records no file.`);
+  if (settings.bins.kind === 'file' && bins === undefined) throw lacking('bins is "file"', 'bins');
+  if (settings.area.kind === 'file' && area === undefined) throw lacking('area is "file"', 'area');
+  if (settings.within && within === undefined) throw lacking('within is true', 'within');
   return {
     ...options,
     input: await recorded(occurrences),
     settings,
     binsFile: settings.bins.kind === 'file' && bins !== undefined ? await recorded(bins) : undefined,
     rotation: rotation === undefined ? undefined : await recorded(rotation),
+    areaFile: settings.area.kind === 'file' && area !== undefined ? await recorded(area) : undefined,
+    withinFile: settings.within && within !== undefined ? await recorded(within) : undefined,
+    indicators: indicators === undefined ? undefined : await recorded(indicators),
   };
 }
 

@@ -5,6 +5,7 @@ Usage:
   driftgrid coverage --session <results/session.json> --out <folder>
   driftgrid curves <occurrences.csv|tsv> [options] [--quorum Q] [--trials N] [--rarefy N]
                    [--age-trials N] [--region-km KM]
+  driftgrid gaps <occurrences.csv|tsv> --area <land.geojson>|occupied|all [--indicators <indicators.csv>] [options]
   driftgrid rotate <table.csv|tsv> --rotation <poles.csv> [options]
   driftgrid rotate <land.geojson> --rotation <poles.csv> [--bins …] [--single-file] [--out <folder>]
   driftgrid --version
@@ -17,6 +18,10 @@ curves: the coverage run, then richness slice by slice, raw and standardised (SQ
 circular regions, rarefaction), beside the footprint; writes curves.csv, regions.geojson,
 rejects.csv and session.json, and flags slices where raw richness moved with the footprint but
 standardised richness did not.
+
+gaps: the run of coverage, then per slice the part of the available area with no occurrence,
+merged into gaps (gaps.csv, gaps.geojson), and occurrences, cells and indicator sites per
+latitude band with the shift of the sampled latitudes from the slice before (belts.csv).
 
 rotate: carry present-day positions back with a rotation model. A table is written back
 unchanged with palaeo_lat, palaeo_lon and placed_at_ma appended (<name>-rotated.csv,
@@ -47,10 +52,19 @@ Options:
   --rarefy N             curves: rarefied richness in N occurrences (Hurlbert). Default: none
   --age-trials N         curves: raw richness over N draws of each row's age. Default: none
   --region-km KM         curves: radius of the circular regions, 0 < KM < 10000. Default: 1500
+  --within <region.geojson>
+                         coverage, gaps: keep only occurrences placed inside this fixed region
+                         (counted in the summary, not listed as rejects)
+  --area <land.geojson>|occupied|all
+                         gaps: where occurrences could be: polygons (moved with the plates when
+                         they carry plate_id), the cells occupied in any slice, or the whole
+                         sphere. Default: occupied
+  --band-deg W           gaps: width of the latitude bands of belts.csv, degrees. Default: 10
+  --indicators <file>    gaps: climate indicator sites (kind; ages and positions as for occurrences)
   --single-file          rotate GeoJSON: one file, with slice, slice_name and
                          placed_at_ma on every feature
   --out <folder>         where to write the results. Default: results
-  --session <file>       repeat the coverage or curves run recorded in a session file (inputs must be unchanged)
+  --session <file>       repeat the coverage, curves or gaps run recorded in a session file (inputs must be unchanged)
   --quiet                print nothing but errors
   -h, --help             this text
 

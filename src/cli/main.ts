@@ -1,5 +1,6 @@
 import { runCoverage } from './coverage-command';
 import { runCurvesCommand } from './curves-command';
+import { runGapsCommand } from './gaps-command';
 import { runRotate } from './rotate-command';
 import { HELP } from './help';
 import { TOOL_VERSION } from '../version';
@@ -16,6 +17,8 @@ export async function main(argv: readonly string[]): Promise<number> {
         return await runCoverage(rest);
       case 'curves':
         return await runCurvesCommand(rest);
+      case 'gaps':
+        return await runGapsCommand(rest);
       case 'rotate':
         return await runRotate(rest);
       case '--version':
@@ -29,7 +32,7 @@ export async function main(argv: readonly string[]): Promise<number> {
         process.stdout.write(HELP);
         return 0;
       default:
-        throw new Error(`Unknown command "${command}". Commands: coverage, curves, rotate. See \`driftgrid --help\`.`);
+        throw new Error(`Unknown command "${command}". Commands: coverage, curves, gaps, rotate. See \`driftgrid --help\`.`);
     }
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);

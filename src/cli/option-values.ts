@@ -1,5 +1,5 @@
 import type { ParseArgsConfig } from 'node:util';
-import { namesBuiltInBins, parseRunSettings, type RunSettings } from '../run';
+import { namesBuiltInArea, namesBuiltInBins, parseRunSettings, type RunSettings } from '../run';
 
 /** The options `coverage` and `rotate` both take, as node:util parseArgs specs. */
 export const SHARED_OPTIONS = {
@@ -29,14 +29,29 @@ interface SettingOptions {
   readonly rarefy?: string;
   readonly 'age-trials'?: string;
   readonly 'region-km'?: string;
+  readonly area?: string;
+  readonly 'band-deg'?: string;
+  readonly within?: string;
+}
+
+/** The run settings of the options, and the files some of them name. */
+export interface OptionSettings {
+  readonly settings: RunSettings;
+  readonly binsFile: string | undefined;
+  /** The area polygons, when `--area` names a file. */
+  readonly areaFile: string | undefined;
+  /** The fixed region of `--within`. */
+  readonly withinFile: string | undefined;
 }
 
 /**
  * The run settings in the options, read by parseRunSettings (so a bad value reads as it does in a
- * session file, named by its option); `--bins` with a path means own bins, read from `binsFile`.
+ * session file, named by its option); `--bins` with a path means own bins, read from `binsFile`,
+ * `--area` with a path an area file, and `--within` a fixed region.
  */
-export function settingsFromOptions(values: SettingOptions): { settings: RunSettings; binsFile: string | undefined } {
+export function settingsFromOptions(values: SettingOptions): OptionSettings {
   const binsFile = values.bins === undefined || namesBuiltInBins(values.bins) ? undefined : values.bins;
+  const areaFile = values.area === undefined || namesBuiltInArea(values.area) ? undefined : values.area;
   const raw = {
     bins: binsFile === undefined ? values.bins : 'file',
     assign: values.assign,
@@ -51,9 +66,12 @@ export function settingsFromOptions(values: SettingOptions): { settings: RunSett
     rarefy: values.rarefy,
     ageTrials: values['age-trials'],
     regionKm: values['region-km'],
+    area: areaFile === undefined ? values.area : 'file',
+    bandDeg: values['band-deg'],
+    within: values.within === undefined ? undefined : true,
   };
   const given = Object.fromEntries(Object.entries(raw).filter(([, value]) => value !== undefined));
-  return { settings: parseRunSettings(given, { naming: 'option' }), binsFile };
+  return { settings: parseRunSettings(given, { naming: 'option' }), binsFile, areaFile, withinFile: values.within };
 }
 
 /** An option error from node:util parseArgs, pointing to --help. */

@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { stat } from 'node:fs/promises';
-import { runAnalysis, type Run, type SessionInputs } from '../run';
+import { fixedPolygonsOf, runAnalysis, type Run, type SessionInputs } from '../run';
 import type { RotationModel } from '../rotation';
 import type { OccurrenceReadResult } from '../table';
 import { findChartInterval } from '../time';
@@ -8,6 +8,7 @@ import type { CoverageOptions } from './coverage-options';
 import { sessionInput } from './coverage-session';
 import { fileDigest } from './file-digest';
 import { progressReporter } from './progress';
+import { readGeoJsonFile } from './read-geojson-file';
 import { readRotationFile } from './read-rotation-file';
 import { readBinsFile, readTableFile } from './read-table-file';
 
@@ -21,13 +22,15 @@ export interface ReadRun {
   readonly inputPaths: readonly string[];
 }
 
-/** Reads the table (hashing it on the way), the bins and the rotation model, and runs the analysis. */
+/** Reads the table (hashing it on the way), the bins, the rotation model and the fixed region, and runs the analysis;
+ * the session records every input the options name (gaps' area and indicators too). */
 export async function readRun(options: CoverageOptions): Promise<ReadRun> {
-  const { settings, binsFile, rotation: rotationFile, out: outFolder } = options;
+  const { settings, binsFile, rotation: rotationFile, withinFile, out: outFolder } = options;
   const input = options.input as string;
 
   const bins = binsFile === undefined ? undefined : await readBinsFile(binsFile);
   const model = rotationFile === undefined ? undefined : await readRotationFile(rotationFile, settings.beyondModel);
+  const within = withinFile === undefined ? undefined : fixedPolygonsOf(await readGeoJsonFile(withinFile), withinFile);
 
   const hash = createHash('sha256');
   let bytesRead = 0;
@@ -46,13 +49,18 @@ export async function readRun(options: CoverageOptions): Promise<ReadRun> {
   progress.done();
   const digest = { sha256: hash.digest('hex'), bytes: bytesRead };
 
-  const run = runAnalysis(read.table, settings, { bins, model });
-  const inputs = {
+  const run = runAnalysis(read.table, settings, { bins, model, within });
+  const recorded = async <K extends string>(key: K, path: string | undefined) =>
+    (path === undefined ? {} : ({ [key]: sessionInput(path, await fileDigest(path), outFolder) } as Record<K, SessionInputs['occurrences']>));
+  const inputs: SessionInputs = {
     occurrences: sessionInput(input, digest, outFolder),
-    ...(binsFile === undefined ? {} : { bins: sessionInput(binsFile, await fileDigest(binsFile), outFolder) }),
-    ...(rotationFile === undefined ? {} : { rotation: sessionInput(rotationFile, await fileDigest(rotationFile), outFolder) }),
+    ...(await recorded('bins', binsFile)),
+    ...(await recorded('rotation', rotationFile)),
+    ...(await recorded('within', withinFile)),
+    ...(await recorded('area', options.areaFile)),
+    ...(await recorded('indicators', options.indicators)),
   };
-  const inputPaths = [input, ...(binsFile === undefined ? [] : [binsFile]), ...(rotationFile === undefined ? [] : [rotationFile])];
+  const inputPaths = [input, binsFile, rotationFile, withinFile, options.areaFile, options.indicators].filter((p): p is string => p !== undefined);
   return { run, read, model, inputs, inputPaths };
 }
 

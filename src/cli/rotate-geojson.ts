@@ -1,4 +1,4 @@
-import { open, readFile, writeFile } from 'node:fs/promises';
+import { open, writeFile } from 'node:fs/promises';
 import { basename, extname } from 'node:path';
 import { rotateNotesCsv, type FeatureNote } from '../export/rotate-notes-csv';
 import { FEATURE_COLLECTION_END, FEATURE_COLLECTION_START, FEATURE_SEPARATOR, featureText } from '../export/rotated-geojson';
@@ -6,6 +6,7 @@ import { sliceFileName } from '../export/slice-file-name';
 import { plateFeaturesOf, reconstructFeaturesAt, type ReconstructedFeature } from '../placement';
 import type { RotationModel } from '../rotation';
 import type { RotateContext } from './rotate-command';
+import { readGeoJsonFile } from './read-geojson-file';
 import { modelNotes } from './summary';
 import { prepareTargets } from './write-results';
 
@@ -16,22 +17,6 @@ function oldestReach(model: RotationModel): number {
   return Math.max(0, ...model.plateIds().map((p) => model.reachMa(p) ?? 0));
 }
 
-async function readGeoJson(path: string): Promise<unknown> {
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(await readFile(path));
-  } catch (error) {
-    throw new Error(`${path}: cannot read it as UTF-8 text (${error instanceof Error ? error.message : String(error)}); expected a GeoJSON file`);
-  }
-  try {
-    return JSON.parse(text);
-  } catch (error) {
-    // The parser's message may quote the text, line breaks and all: keep the message on one line.
-    const why = (error instanceof Error ? error.message : String(error)).replace(/\s+/g, ' ');
-    throw new Error(`${path}: not JSON (${why}); expected a GeoJSON FeatureCollection`);
-  }
-}
-
 /**
  * rotate on GeoJSON: the polygons carried to each slice's mid-age, one FeatureCollection
  * per slice or all in one file (--single-file); every feature left out of a slice, clamped, or
@@ -40,7 +25,7 @@ async function readGeoJson(path: string): Promise<unknown> {
 export async function rotateGeoJson(context: RotateContext): Promise<void> {
   const { options, model } = context;
   const { input } = options;
-  const { features, notes: readingNotes } = plateFeaturesOf(await readGeoJson(input), input);
+  const { features, notes: readingNotes } = plateFeaturesOf(await readGeoJsonFile(input), input);
   const scale = context.scaleFor(oldestReach(model));
   const count = scale.names.length;
   const sliceNames = scale.names.map((name, s) => sliceFileName(s + 1, count, name, 'geojson'));

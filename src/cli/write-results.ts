@@ -29,7 +29,7 @@ export async function writeResults(folder: string, files: Readonly<Record<string
 }
 
 /**
- * Writes a run's export files into `folder` (created when missing), never over any of the inputs,
+ * Writes a run's export files (`names`, those of coverage by default) into `folder` (created when missing), never over any of the inputs,
  * each streamed to disk chunk by chunk as it is made, so that memory stays bounded however large
  * the cell files grow.
  */

@@ -6,9 +6,12 @@ export const SESSION_FORMAT = 'driftgrid-session';
  * assignment rules (`mid-age`, `whole-range`, `share:F`, `draw`) and the age fields of the column
  * map (`oldest_ma`, `youngest_ma`), which an older tool would not know. */
 export const SESSION_FORMAT_VERSION = 3;
+/** 4 added gaps and the fixed region (inputs.area/within/indicators, settings.area/bandDeg/within).
+ * A session using none of them is still written as 3, so that coverage sessions read as before. */
+export const SESSION_FORMAT_VERSION_GAPS = 4;
 /** Versions this tool reads: a version 1 file is a run without a rotation model; versions 1 and 2
  * use the former names, which parseRunSettings (src/run) reads as the present ones. */
-const READABLE_VERSIONS: readonly number[] = [1, 2, 3];
+const READABLE_VERSIONS: readonly number[] = [1, 2, 3, 4];
 
 /** An input file as the session recorded it. */
 export interface SessionInput {
@@ -38,13 +41,29 @@ export interface SessionSettings {
   readonly rarefy?: number;
   readonly ageTrials?: number;
   readonly regionKm?: number;
+  /** `all`, `occupied` or `file` (format 4; written only when not `occupied`). */
+  readonly area?: string;
+  /** Latitude band width of belts.csv, degrees (format 4; written only when not 10). */
+  readonly bandDeg?: number;
+  /** True with a fixed region (inputs.within; format 4; written only when true). */
+  readonly within?: boolean;
+}
+
+/** The input files a session records; area, within and indicators came with format 4. */
+export interface SessionInputFiles {
+  readonly occurrences: SessionInput;
+  readonly bins?: SessionInput;
+  readonly rotation?: SessionInput;
+  readonly area?: SessionInput;
+  readonly within?: SessionInput;
+  readonly indicators?: SessionInput;
 }
 
 export interface Session {
   readonly format: typeof SESSION_FORMAT;
   readonly formatVersion: number;
   readonly tool: { readonly name: 'driftgrid'; readonly version: string };
-  readonly inputs: { readonly occurrences: SessionInput; readonly bins?: SessionInput; readonly rotation?: SessionInput };
+  readonly inputs: SessionInputFiles;
   readonly settings: SessionSettings;
   /** What the run found, for the record; not read back. */
   readonly summary: Readonly<Record<string, unknown>>;
@@ -99,6 +118,9 @@ export function parseSession(text: string, source: string): RecordedSession {
       occurrences: requireInput(inputs.occurrences, source, 'inputs.occurrences'),
       ...(inputs.bins === undefined ? {} : { bins: requireInput(inputs.bins, source, 'inputs.bins') }),
       ...(inputs.rotation === undefined ? {} : { rotation: requireInput(inputs.rotation, source, 'inputs.rotation') }),
+      ...(inputs.area === undefined ? {} : { area: requireInput(inputs.area, source, 'inputs.area') }),
+      ...(inputs.within === undefined ? {} : { within: requireInput(inputs.within, source, 'inputs.within') }),
+      ...(inputs.indicators === undefined ? {} : { indicators: requireInput(inputs.indicators, source, 'inputs.indicators') }),
     },
     settings,
     summary: root.summary === undefined ? {} : requireObject(root.summary, source, 'summary'),

@@ -1,5 +1,7 @@
 import type { AnalysisResult } from '../analysis';
-import { SESSION_FORMAT, SESSION_FORMAT_VERSION, sessionSummary, type Session, type SessionInput } from '../export/session';
+import {
+  SESSION_FORMAT, SESSION_FORMAT_VERSION, SESSION_FORMAT_VERSION_GAPS, sessionSummary, type Session, type SessionInput,
+} from '../export/session';
 import { TOOL_VERSION } from '../version';
 import type { RunSettings } from './run-settings';
 import { settingsText } from './settings-text';
@@ -9,6 +11,11 @@ export interface SessionInputs {
   readonly occurrences: SessionInput;
   readonly bins?: SessionInput;
   readonly rotation?: SessionInput;
+  /** The area polygons of gaps, recorded when settings.area is `file`. */
+  readonly area?: SessionInput;
+  /** The fixed region, recorded when settings.within is true. */
+  readonly within?: SessionInput;
+  readonly indicators?: SessionInput;
 }
 
 /** What the reader made of the occurrence table, for the session's summary. */
@@ -18,18 +25,28 @@ export interface ReadCounts {
   readonly rejectedOnReading: number;
 }
 
-/** The session of a run: inputs, settings and what it found. A bins input is recorded only for own bins. */
-export function buildSession(inputs: SessionInputs, settings: RunSettings, read: ReadCounts, result: AnalysisResult): Session {
+/** The session of a run: inputs, settings and what it found (with `gaps`, what runGaps found). A bins input is recorded only for own bins. */
+export function buildSession(
+  inputs: SessionInputs, settings: RunSettings, read: ReadCounts, result: AnalysisResult, gaps?: Readonly<Record<string, unknown>>,
+): Session {
+  const text = settingsText(settings);
+  const area = settings.area.kind === 'file' ? inputs.area : undefined;
+  const within = settings.within ? inputs.within : undefined;
+  const usesFormat3 = area !== undefined || within !== undefined || inputs.indicators !== undefined
+    || text.area !== undefined || text.bandDeg !== undefined || text.within !== undefined;
   return {
     format: SESSION_FORMAT,
-    formatVersion: SESSION_FORMAT_VERSION,
+    formatVersion: usesFormat3 ? SESSION_FORMAT_VERSION_GAPS : SESSION_FORMAT_VERSION,
     tool: { name: 'driftgrid', version: TOOL_VERSION },
     inputs: {
       occurrences: inputs.occurrences,
       ...(settings.bins.kind !== 'file' || inputs.bins === undefined ? {} : { bins: inputs.bins }),
       ...(inputs.rotation === undefined ? {} : { rotation: inputs.rotation }),
+      ...(area === undefined ? {} : { area }),
+      ...(within === undefined ? {} : { within }),
+      ...(inputs.indicators === undefined ? {} : { indicators: inputs.indicators }),
     },
-    settings: settingsText(settings),
-    summary: sessionSummary(read, result),
+    settings: text,
+    summary: { ...sessionSummary(read, result), ...(settings.within ? { outsideRegion: result.outsideRegion } : {}), ...(gaps === undefined ? {} : { gaps }) },
   };
 }

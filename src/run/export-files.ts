@@ -5,19 +5,25 @@ import { cellsGeoJson } from '../export/cells-geojson';
 import { rejectsCsv } from '../export/rejects-csv';
 import { sessionJson } from '../export/session';
 import { slicesCsv } from '../export/slices-csv';
+import { beltsCsv } from '../export/belts-csv';
+import { gapsCsv } from '../export/gaps-csv';
+import { gapsGeoJson } from '../export/gaps-geojson';
 import { excludedLines, excludedRows } from '../placement';
 import type { OccurrenceReadResult } from '../table';
 import { buildSession, type SessionInputs } from './build-session';
 import { readRawRecords } from './read-records';
 import type { Run } from './run-analysis';
 import type { CurvesRun } from './run-curves';
+import type { GapsRun } from './run-gaps';
 import type { TextSource } from './text-source';
 
 /** The files a coverage run writes (README, "Exports"), in the order they are written. */
 export const EXPORT_FILES = ['slices.csv', 'cells.csv', 'cells.geojson', 'rejects.csv', 'session.json'] as const;
 /** The files a curves run writes. */
 export const CURVES_FILES = ['curves.csv', 'regions.geojson', 'rejects.csv', 'session.json'] as const;
-export type ExportFile = (typeof EXPORT_FILES)[number] | (typeof CURVES_FILES)[number];
+/** The files `gaps` writes (README, "Exports"). */
+export const GAPS_EXPORT_FILES = ['gaps.csv', 'gaps.geojson', 'belts.csv', 'session.json'] as const;
+export type ExportFile = (typeof EXPORT_FILES)[number] | (typeof CURVES_FILES)[number] | (typeof GAPS_EXPORT_FILES)[number];
 
 /** A run with the table it read and where that table's text can be read again. */
 export interface ExportSource {
@@ -28,6 +34,8 @@ export interface ExportSource {
   readonly tableText: TextSource;
   /** The run's richness curves (runCurves), needed for curves.csv and regions.geojson. */
   readonly curves?: CurvesRun;
+  /** The gaps of the run, for gaps.csv, gaps.geojson and belts.csv. */
+  readonly gaps?: GapsRun;
 }
 
 /**
@@ -66,9 +74,20 @@ export async function* exportFileChunks(source: ExportSource, name: ExportFile):
     }
     case 'session.json': {
       const counts = { rowsRead: read.rowsRead, accepted: read.table.count, rejectedOnReading: read.rejects.length };
-      yield encoder.encode(sessionJson(buildSession(source.inputs, run.settings, counts, result)));
+      yield encoder.encode(sessionJson(buildSession(source.inputs, run.settings, counts, result, source.gaps?.summary)));
       return;
     }
+    case 'gaps.csv':
+      yield encoder.encode(gapsCsv(run.scale, gapsOf(source).gapSummary));
+      return;
+    case 'gaps.geojson': {
+      const gaps = gapsOf(source);
+      yield encoder.encode(gapsGeoJson(gaps.gapGrid, run.scale, gaps.slices));
+      return;
+    }
+    case 'belts.csv':
+      yield encoder.encode(beltsCsv(run.scale, gapsOf(source).belts));
+      return;
   }
 }
 
@@ -95,4 +114,9 @@ const encoder = new TextEncoder();
 function curvesOf(source: ExportSource): CurvesRun {
   if (source.curves === undefined) throw new Error('curves.csv and regions.geojson need the curves of the run (runCurves)');
   return source.curves;
+}
+
+function gapsOf(source: ExportSource): GapsRun {
+  if (source.gaps === undefined) throw new Error('gaps.csv, gaps.geojson and belts.csv need the gaps of the run (runGaps)');
+  return source.gaps;
 }

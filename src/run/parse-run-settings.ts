@@ -2,6 +2,7 @@ import { ROTATE_AT, type RotateAt } from '../placement';
 import { ProblemList } from '../problems';
 import { BEYOND_MODEL, type BeyondModel } from '../rotation';
 import { isSeed } from '../time';
+import { AREA_EXPECTED, areaChoiceOf } from './area-choice';
 import { ASSIGN_EXPECTED, assignChoiceOf } from './assign-choice';
 import { BINS_EXPECTED, binsChoiceOf } from './bins-choice';
 import { presentAssignName, presentFieldName } from './former-names';
@@ -24,12 +25,14 @@ const OPTION_NAMES: Readonly<Record<RunSettingName, string>> = {
   bins: '--bins', assign: '--assign', seed: '--seed', grid: '--grid', map: '--map',
   rotateAt: '--rotate-at', preferModel: '--prefer-model', beyondModel: '--beyond-model',
   quorum: '--quorum', trials: '--trials', rarefy: '--rarefy', ageTrials: '--age-trials', regionKm: '--region-km',
+  area: '--area', bandDeg: '--band-deg', within: '--within',
 };
 
 /** Settings a session file must give (format 1 had these; the rotation settings came with format 2). */
 const REQUIRED_SETTINGS: readonly RunSettingName[] = ['bins', 'assign', 'seed', 'grid', 'map'];
 
 const SEED_EXPECTED = 'a whole number from 0 to 4294967295';
+const BAND_EXPECTED = 'a band width in degrees, more than 0 and at most 180 (e.g. 10)';
 const MAP_EXPECTED = 'field=column, e.g. taxon=genus_name';
 
 /**
@@ -81,9 +84,12 @@ export function parseRunSettings(given: object, source: SettingsSource): RunSett
     grid: choice('grid', gridChoiceOf, GRID_EXPECTED, DEFAULT_RUN_SETTINGS.grid),
     map: mapOf(raw.map, recorded ? presentFieldName : (field) => field, (value, expected) => refuse('map', value, expected)),
     rotateAt: oneOf<RotateAt>('rotateAt', ROTATE_AT, DEFAULT_RUN_SETTINGS.rotateAt),
-    preferModel: booleanOf(raw.preferModel, () => refuse('preferModel', raw.preferModel, 'true or false')),
+    preferModel: booleanOf(raw.preferModel, () => refuse('preferModel', raw.preferModel, 'true or false'), DEFAULT_RUN_SETTINGS.preferModel),
     beyondModel: oneOf<BeyondModel>('beyondModel', BEYOND_MODEL, DEFAULT_RUN_SETTINGS.beyondModel),
     ...curvesOf(raw, refuse),
+    area: choice('area', areaChoiceOf, AREA_EXPECTED, DEFAULT_RUN_SETTINGS.area),
+    bandDeg: bandOf(raw.bandDeg, () => refuse('bandDeg', raw.bandDeg, BAND_EXPECTED)),
+    within: booleanOf(raw.within, () => refuse('within', raw.within, 'true or false'), DEFAULT_RUN_SETTINGS.within),
   };
   problems.throwIfAny(source.name);
   return settings;
@@ -125,11 +131,20 @@ function seedOf(value: unknown, refuse: () => void): number {
   return DEFAULT_RUN_SETTINGS.seed;
 }
 
-function booleanOf(value: unknown, refuse: () => void): boolean {
-  if (value === undefined) return DEFAULT_RUN_SETTINGS.preferModel;
+function booleanOf(value: unknown, refuse: () => void, fallback: boolean): boolean {
+  if (value === undefined) return fallback;
   if (typeof value === 'boolean') return value;
   refuse();
-  return DEFAULT_RUN_SETTINGS.preferModel;
+  return fallback;
+}
+
+/** A band width as a JSON number or as an option's text. */
+function bandOf(value: unknown, refuse: () => void): number {
+  if (value === undefined) return DEFAULT_RUN_SETTINGS.bandDeg;
+  const width = typeof value === 'number' ? value : typeof value === 'string' && value.trim() !== '' ? Number(value) : Number.NaN;
+  if (width > 0 && width <= 180) return width;
+  refuse();
+  return DEFAULT_RUN_SETTINGS.bandDeg;
 }
 
 /**

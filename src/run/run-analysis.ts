@@ -1,4 +1,5 @@
 import { analyse, type AnalysisResult, type AnalysisSettings } from '../analysis';
+import type { SphericalPolygons } from '../gaps';
 import type { EqualAreaGrid } from '../grid';
 import type { RotationModel } from '../rotation';
 import { loneOldestRow, oldestAge, type LoneOldestRow, type OccurrenceTable } from '../table';
@@ -14,6 +15,8 @@ export interface RunInputs {
   readonly bins?: TimeScale;
   /** The rotation model, built with settings.beyondModel. */
   readonly model?: RotationModel;
+  /** The fixed region (needed when settings.within is true). */
+  readonly within?: SphericalPolygons;
 }
 
 /** One analysis with what it was made from: enough to write every export file. */
@@ -34,9 +37,11 @@ export function runAnalysis(table: OccurrenceTable, settings: RunSettings, input
   const scale = scaleOf(settings, table, inputs.bins);
   const grid = gridOf(settings.grid);
   const { model } = inputs;
+  if (settings.within && inputs.within === undefined) throw new Error('a fixed region is set but no region is loaded; load a GeoJSON file or clear the region');
   const core: AnalysisSettings = {
     scale, grid, rule: assignRuleOf(settings.assign, settings.seed), rotation: model,
     placement: { rotateAt: settings.rotateAt, preferModel: settings.preferModel },
+    ...(settings.within ? { within: inputs.within } : {}),
   };
   const loneOldest = settings.bins.kind === 'equal' ? loneOldestRow(table, settings.bins.widthMyr) : undefined;
   return { settings, scale, grid, model, core, result: analyse(table, core), loneOldest };

@@ -1,5 +1,6 @@
 import { ROTATE_AT, type RotateAt } from '../placement';
 import { BEYOND_MODEL, type BeyondModel } from '../rotation';
+import type { AreaChoice } from './area-choice';
 import type { AssignChoice } from './assign-choice';
 import type { BinsChoice } from './bins-choice';
 import type { CurvesSettings } from './curves-settings';
@@ -19,6 +20,12 @@ export interface RunSettings {
   readonly beyondModel: BeyondModel;
   /** Richness standardisation, present for the `curves` command only (coverage sessions stay as they were). */
   readonly curves?: CurvesSettings;
+  /** The available area of `gaps` (a `file` area is the run's area input). */
+  readonly area: AreaChoice;
+  /** Width of the latitude bands of belts.csv, degrees (0 < W <= 180). */
+  readonly bandDeg: number;
+  /** True when only occurrences placed inside the run's fixed region (its `within` input) are kept. */
+  readonly within: boolean;
 }
 
 export const DEFAULT_RUN_SETTINGS: RunSettings = {
@@ -30,6 +37,9 @@ export const DEFAULT_RUN_SETTINGS: RunSettings = {
   rotateAt: ROTATE_AT.slice,
   preferModel: false,
   beyondModel: BEYOND_MODEL.reject,
+  area: { kind: 'occupied' },
+  bandDeg: 10,
+  within: false,
 };
 
 /** The names of the curves settings, flat beside the others in session files and messages. */
@@ -37,6 +47,6 @@ export const CURVES_SETTING_NAMES = ['quorum', 'trials', 'rarefy', 'ageTrials', 
 
 /** The settings' names, in the order session files write them. */
 export const RUN_SETTING_NAMES = [
-  'bins', 'assign', 'seed', 'grid', 'map', 'rotateAt', 'preferModel', 'beyondModel', ...CURVES_SETTING_NAMES,
+  'bins', 'assign', 'seed', 'grid', 'map', 'rotateAt', 'preferModel', 'beyondModel', 'area', 'bandDeg', 'within', ...CURVES_SETTING_NAMES,
 ] as const;
 export type RunSettingName = (typeof RUN_SETTING_NAMES)[number];

@@ -32,13 +32,19 @@ describe('run settings', () => {
 
   it('read the text of options and session files into tagged choices', () => {
     const settings = parseRunSettings(
-      { bins: ' Equal:2.5 ', assign: 'share:0.75', seed: '42', grid: 'bands:10', map: ['taxon=genus', 'lat=y'], rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp' },
+      {
+        bins: ' Equal:2.5 ', assign: 'share:0.75', seed: '42', grid: 'bands:10', map: ['taxon=genus', 'lat=y'], rotateAt: 'occurrence', preferModel: true,
+        beyondModel: 'clamp', area: ' All', bandDeg: '15', within: true,
+      },
       AS_OPTIONS,
     );
     expect(settings).toEqual({
       bins: { kind: 'equal', widthMyr: 2.5 }, assign: { kind: 'share', fraction: 0.75 }, seed: 42, grid: { kind: 'bands', degrees: 10 },
       map: { taxon: 'genus', lat: 'y' }, rotateAt: 'occurrence', preferModel: true, beyondModel: 'clamp',
+      area: { kind: 'all' }, bandDeg: 15, within: true,
     });
+    // The settings of gaps and of a fixed region are written only when they differ from the defaults.
+    expect(settingsText(settings)).toMatchObject({ area: 'all', bandDeg: 15, within: true });
     expect(parseRunSettings({ ...REQUIRED, bins: 'file', assign: 'draw', seed: 4294967295 }, AS_SETTINGS)).toMatchObject({
       bins: { kind: 'file' }, assign: { kind: 'draw' }, seed: 4294967295,
     });
@@ -75,12 +81,16 @@ describe('run settings', () => {
     ['beyondModel', 'wrap', 'reject or clamp'],
     ['preferModel', 'yes', 'true or false'],
     ['bins', 7, 'periods, epochs, stages, equal:N (N-Myr bins, e.g. equal:10) or file (an own bins table)'],
-    ['colour', 'red', 'one of the settings bins, assign, seed, grid, map, rotateAt, preferModel, beyondModel, quorum, trials, rarefy, ageTrials, regionKm'],
     ['quorum', 0, 'a number above 0 and at most 1, e.g. 0.5'],
     ['trials', 2.5, 'a whole number from 1 to 100000'],
     ['rarefy', 0, 'a whole number of occurrences, at least 1'],
     ['ageTrials', -3, 'a whole number from 1 to 100000'],
     ['regionKm', 10000, 'a distance in km above 0 and below 10000'],
+    ['area', 'sea', 'all, occupied, or file (a GeoJSON file of polygons)'],
+    ['bandDeg', 0, 'a band width in degrees, more than 0 and at most 180 (e.g. 10)'],
+    ['bandDeg', '200', 'a band width in degrees, more than 0 and at most 180 (e.g. 10)'],
+    ['within', 'yes', 'true or false'],
+    ['colour', 'red', 'one of the settings bins, assign, seed, grid, map, rotateAt, preferModel, beyondModel, area, bandDeg, within, quorum, trials, rarefy, ageTrials, regionKm'],
   ])('refuse %s %j, naming the field, the value and what was expected', (name, value, expected) => {
     const shown = typeof value === 'string' ? value : JSON.stringify(value);
     expect(refusal({ ...REQUIRED, [name]: value }, { name: 'session.json', naming: 'setting' }))

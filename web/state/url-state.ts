@@ -72,6 +72,9 @@ export function decodeUrlState(hash: string): { state: UrlState; ignored: string
     rotateAt: setting('rotateAt', 'rotate-at'),
     preferModel: p.get('prefer-model') === '1',
     beyondModel: setting('beyondModel', 'beyond-model'),
+    area: DEFAULT_RUN_SETTINGS.area,
+    bandDeg: DEFAULT_RUN_SETTINGS.bandDeg,
+    within: DEFAULT_RUN_SETTINGS.within,
   };
   const layersText = p.get('layers');
   const layerNames = layersText === null ? undefined : layersText.split(',').filter((x) => x !== '');

@@ -18,6 +18,7 @@ import { blobText } from './stream-source';
 const MEDIA_TYPES: Readonly<Record<ExportFile, string>> = {
   'slices.csv': 'text/csv', 'cells.csv': 'text/csv', 'cells.geojson': 'application/geo+json', 'rejects.csv': 'text/csv', 'session.json': 'application/json',
   'curves.csv': 'text/csv', 'regions.geojson': 'application/geo+json',
+  'gaps.csv': 'text/csv', 'gaps.geojson': 'application/geo+json', 'belts.csv': 'text/csv',
 };
 
 export class Workbench {
