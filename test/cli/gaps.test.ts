@@ -179,3 +179,35 @@ describe('driftgrid gaps on a made-up table', () => {
     expect(band.stderr).toContain('--band-deg "0": expected a band width in degrees, more than 0 and at most 180');
   });
 });
+
+describe('driftgrid gaps with an area that moves with the plates', () => {
+  it('makes a cell available when its centre is inside the area as reconstruct moves it to the slice', async () => {
+    // Outside reference: d3-geo's geoContains on the polygons `reconstruct` writes for each slice
+    // with the same model; the demo's land carries plate_id.
+    const dir = tempDir('gaps-plates');
+    const nside = 8;
+    const demo = (name: string) => join('assets', 'demo', name);
+    const moved = await runCli('reconstruct', demo('land.geojson'), '--rotation', demo('poles.csv'), '--bins', 'stages', '--single-file', '--out', join(dir, 'land'), '--quiet');
+    expect(moved.stderr).toBe('');
+    const run = await runCli(
+      'gaps', demo('occurrences.csv'), '--area', demo('land.geojson'), '--rotation', demo('poles.csv'), '--bins', 'stages', '--grid', `healpix:${nside}`,
+      '--out', join(dir, 'gaps'), '--quiet',
+    );
+    expect(run.stderr).toBe('');
+    const land = JSON.parse(readFileSync(join(dir, 'land', 'land-reconstructed.geojson'), 'utf8')) as FeatureCollection<Polygon | MultiPolygon>;
+    const cells = new HealpixGrid(nside);
+    const centresAt = Array.from({ length: cells.cellCount }, (_, c) => Array.from(cells.cellCentreInto(c, new Float64Array(2))));
+    const cellKm2 = (4 * Math.PI * R_KM * R_KM) / cells.cellCount;
+    const gaps = readCsv(join(dir, 'gaps', 'gaps.csv'));
+    const checked = gaps.filter((row) => Number(row.available_km2) > 0).slice(-3);
+    expect(checked.length).toBe(3);
+    for (const row of checked) {
+      // d3-geo reads rings clockwise: each ring is reversed.
+      const polygons = land.features.filter((f) => (f.properties as { slice: number }).slice === Number(row.slice)).map((f) => ({
+        type: f.geometry.type, coordinates: f.geometry.type === 'Polygon' ? f.geometry.coordinates.map((r) => [...r].reverse()) : f.geometry.coordinates.map((p) => p.map((r) => [...r].reverse())),
+      }) as Polygon | MultiPolygon);
+      const inside = centresAt.filter(([lat, lon]) => polygons.some((g) => geoContains(g, [lon, lat]))).length;
+      expect(Number(row.available_km2)).toBeCloseTo(inside * cellKm2, 0);
+    }
+  });
+});
