@@ -21,6 +21,8 @@ export type Source =
 
 /** Files the worker writes on request: the command line's set (src/run). */
 export { EXPORT_FILES, type ExportFile } from '../src/run';
+/** The files of `driftgrid gaps` the page exports beside the run's (session.json is among those). */
+export const GAPS_FILES = ['gaps.csv', 'gaps.geojson', 'belts.csv'] as const;
 
 export type Request =
   | { readonly type: 'preview'; readonly id: number; readonly source: Source }

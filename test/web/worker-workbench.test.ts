@@ -61,6 +61,23 @@ describe('the analysis worker', () => {
     expect(session.settings).toEqual(JSON.parse(readFileSync(join(out, 'session.json'), 'utf8')).settings);
   });
 
+  it('writes gaps.csv, gaps.geojson and belts.csv exactly as driftgrid gaps does, indicators placed by the same path', async () => {
+    const table = `${DEMO}/occurrences.csv`;
+    const bench = await demoWorkbench(table);
+    bench.setExtra(await readExtra('indicators', source(`${DEMO}/indicators.csv`)));
+    bench.analyse({ ...DEFAULT_RUN_SETTINGS, grid: { kind: 'healpix', nside: 8 }, bins: { kind: 'chart', rank: 'epochs' } });
+    const out = mkdtempSync(join(tmpdir(), 'dg-worker-gaps-'));
+    const run = await runCli(
+      'gaps', table, '--area', 'occupied', '--bins', 'epochs', '--grid', 'healpix:8', '--rotation', `${DEMO}/poles.csv`,
+      '--indicators', `${DEMO}/indicators.csv`, '--out', out, '--quiet',
+    );
+    expect(run.stderr).toBe('');
+    for (const file of ['gaps.csv', 'gaps.geojson', 'belts.csv'] as const) {
+      const { bytes } = await bench.exportFile(file);
+      expect(text(bytes), file).toBe(readFileSync(join(out, file), 'utf8'));
+    }
+  });
+
   it('refuses settings in a message as a session file refuses them, naming the request', async () => {
     const bench = await demoWorkbench(`${DEMO}/occurrences.csv`);
     const bad = { ...DEFAULT_RUN_SETTINGS, rotateAt: 'sideways', grid: { kind: 'healpix', nside: 33 } } as unknown as RunSettings;

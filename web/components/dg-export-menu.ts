@@ -1,6 +1,6 @@
 /** Exports: the command line's files (written by the worker) and the current figures. */
 import { css, html, nothing } from 'lit';
-import { EXPORT_FILES, type ExportFile } from '../protocol';
+import { EXPORT_FILES, GAPS_FILES, type ExportFile } from '../protocol';
 import { panelStyles } from './shared-styles';
 import { WorkbenchPanel } from './workbench-panel';
 
@@ -32,6 +32,9 @@ export class DgExportMenu extends WorkbenchPanel {
       <h2>Export</h2>
       <div class="buttons" role="group" aria-label="Result files">
         ${FILES.map((file) => html`<button ?disabled=${disabled} data-export=${file} @click=${() => void this.actions?.exportFile(file)}>${file}</button>`)}
+      </div>
+      <div class="buttons" role="group" aria-label="Sampling gaps and latitude belts">
+        ${GAPS_FILES.map((file) => html`<button ?disabled=${disabled} data-export=${file} @click=${() => void this.actions?.exportFile(file)}>${file}</button>`)}
       </div>
       <div class="buttons" role="group" aria-label="Figures of the current slice">
         ${Object.entries(FIGURE_LABELS).map(([figure, label]) => html`

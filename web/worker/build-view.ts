@@ -5,7 +5,8 @@
  * so the whole thing is transferred to the page, not copied.
  */
 import type { Feature, FeatureCollection } from 'geojson';
-import type { AnalysisResult } from '../../src/analysis';
+import type { AnalysisResult, PlacedRows } from '../../src/analysis';
+import { groupBySlice } from '../../src/footprint/group-by-slice';
 import { latitudeHistogram } from '../../src/footprint/latitude-histogram';
 import type { EqualAreaGrid } from '../../src/grid';
 import { reconstructFeaturesAt, type PlateFeature } from '../../src/placement';
@@ -25,7 +26,8 @@ const LATITUDE_BAND_DEG = 10;
 const MAX_INDICATOR_KINDS = 255;
 
 export interface IndicatorAnalysis {
-  readonly result: AnalysisResult;
+  /** The sites binned and placed as occurrences are (placeRows), not measured. */
+  readonly placed: PlacedRows;
   readonly kinds: readonly string[];
   /** Kind code of each indicator row. */
   readonly kindOfRow: Uint32Array;
@@ -50,7 +52,7 @@ export function buildView(inputs: ViewInputs): { view: AnalysisView; transfer: A
   const indicators = inputs.indicators === undefined ? undefined : indicatorPoints(inputs.indicators, sliceCount);
   const latitude = latitudeHistogram(result.sliceOfRow, result.palaeoLat, sliceCount, LATITUDE_BAND_DEG);
   const indicatorLatitude = inputs.indicators === undefined ? undefined : latitudeHistogram(
-    inputs.indicators.result.sliceOfRow, inputs.indicators.result.palaeoLat, sliceCount, LATITUDE_BAND_DEG,
+    inputs.indicators.placed.sliceOfRow, inputs.indicators.placed.placement.lat, sliceCount, LATITUDE_BAND_DEG,
     { of: inputs.indicators.kindOfRow, count: inputs.indicators.kinds.length },
   );
   const basePolygons = inputs.polygons === undefined ? undefined : reconstructedPolygons(inputs.polygons.features, inputs.polygons.model, scale, notes);
@@ -216,16 +218,16 @@ function leverRows(result: AnalysisResult, lines: Uint32Array): LeverRows {
 }
 
 function indicatorPoints(indicators: IndicatorAnalysis, sliceCount: number): IndicatorPoints {
-  const { result, kinds, kindOfRow } = indicators;
+  const { placed, kinds, kindOfRow } = indicators;
   if (kinds.length > MAX_INDICATOR_KINDS) {
     throw new Error(`the indicator table names ${kinds.length} kinds; at most ${MAX_INDICATOR_KINDS} can be shown`);
   }
-  const { order, start } = result.rowsBySlice;
+  const { order, start } = groupBySlice(placed.sliceOfRow, sliceCount);
   const lat = new Float32Array(order.length), lon = new Float32Array(order.length), kind = new Uint8Array(order.length);
   for (let k = 0; k < order.length; k++) {
     const row = order[k];
-    lat[k] = result.palaeoLat[row];
-    lon[k] = result.palaeoLon[row];
+    lat[k] = placed.placement.lat[row];
+    lon[k] = placed.placement.lon[row];
     kind[k] = kindOfRow[row];
   }
   return { sliceStart: start.slice(0, sliceCount + 1), lat, lon, kind, kinds };

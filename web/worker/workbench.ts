@@ -2,12 +2,13 @@
  * The worker's state: the loaded inputs, the last analysis, and what can be asked of them
  * (analyse with settings, a cell's taxa, export files). The same run layer the command line uses.
  */
-import { analyse } from '../../src/analysis';
+import { placeRows } from '../../src/analysis';
 import type { SessionInput } from '../../src/export/session';
 import type { PlateFeature } from '../../src/placement';
 import { createRotationModel } from '../../src/rotation';
 import {
-  exportFileBytes, parseRunSettings, runAnalysis, runCurves, settingsText, type CurvesRun, type Run, type RunSettings, type SessionInputs,
+  exportFileBytes, parseRunSettings, runAnalysis, runCurves, runGaps, settingsText, type CurvesRun, type GapsRun, type Run, type RunSettings,
+  type SessionInputs,
 } from '../../src/run';
 import type { AnalysisView, ExportFile, ExtraRole } from '../protocol';
 import { buildView, type IndicatorAnalysis } from './build-view';
@@ -27,6 +28,8 @@ export class Workbench {
   private current: Run | undefined;
   /** The richness curves of the current run, computed when first asked for (with its curves settings, or the defaults). */
   private currentCurves: CurvesRun | undefined;
+  /** The gaps of the current run, computed when first asked for. */
+  private currentGaps: GapsRun | undefined;
 
   setTable(table: LoadedTable): void {
     this.table = table;
@@ -53,6 +56,7 @@ export class Workbench {
     const run = runAnalysis(table.read.table, settings, { bins: this.extraInput('bins')?.scale, model });
     this.current = run;
     this.currentCurves = undefined;
+    this.currentGaps = undefined;
     const polygons = this.extraInput('polygons');
     return buildView({
       settings: checked, scale: run.scale, grid: run.grid, result: run.result, lines: table.read.table.line,
@@ -78,7 +82,11 @@ export class Workbench {
     const run = this.requireCurrent();
     const table = this.requireTable();
     const curves = file === 'curves.csv' || file === 'regions.geojson' ? this.curves(run) : undefined;
-    const source = { run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob), ...(curves === undefined ? {} : { curves }) };
+    const gaps = file === 'gaps.csv' || file === 'gaps.geojson' || file === 'belts.csv' ? this.gaps(run) : undefined;
+    const source = {
+      run, read: table.read, inputs: this.sessionInputs(), tableText: blobText(table.blob),
+      ...(curves === undefined ? {} : { curves }), ...(gaps === undefined ? {} : { gaps }),
+    };
     return { bytes: await exportFileBytes(source, file), mime: MEDIA_TYPES[file] };
   }
 
@@ -114,7 +122,20 @@ export class Workbench {
     const indicators = this.extraInput('indicators');
     if (indicators === undefined) return undefined;
     const { table } = indicators.read;
-    return { result: analyse(table, run.core), kinds: table.taxon.values, kindOfRow: table.taxon.codes };
+    return { placed: placeRows(table, run.core), kinds: table.taxon.values, kindOfRow: table.taxon.codes };
+  }
+
+  /** Gaps and belts of the current run through the run layer, as `driftgrid gaps` makes them; the
+   * loaded base polygons are the area when the settings name an area file. */
+  private gaps(run: Run): GapsRun {
+    if (this.currentGaps !== undefined) return this.currentGaps;
+    const polygons = this.extras.get('polygons');
+    const features = this.extraInput('polygons')?.features as readonly PlateFeature[] | undefined;
+    this.currentGaps = runGaps(run, {
+      ...(features === undefined ? {} : { area: { kind: 'plates' as const, features }, areaSource: polygons?.summary.name }),
+      indicators: this.extraInput('indicators')?.read.table,
+    });
+    return this.currentGaps;
   }
 
   private extraInput<R extends ExtraRole>(role: R): Extract<LoadedExtra['input'], { role: R }> | undefined {
