@@ -13,7 +13,7 @@ export async function runCoverage(args: readonly string[]): Promise<number> {
   const written = await writeExports(options.out, { run, read, inputs, tableText: fileText(options.input as string) }, inputPaths);
   if (!options.quiet) {
     printSummary({
-      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model: run.model, loneOldest: run.loneOldest, written,
+      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model: run.model, loneOldest: run.loneOldest, within: options.withinFile, written,
       elapsedMs: performance.now() - started,
     });
   }

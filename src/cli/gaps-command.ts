@@ -37,7 +37,7 @@ export async function runGapsCommand(args: readonly string[]): Promise<number> {
   const written = await writeExports(options.out, { run, read, inputs, tableText: fileText(input), gaps }, inputPaths, GAPS_EXPORT_FILES);
   if (!options.quiet) {
     printSummary({
-      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model: run.model, loneOldest: run.loneOldest, written,
+      rowsRead: read.rowsRead, accepted: read.table.count, rejects: read.rejects, result: run.result, model: run.model, loneOldest: run.loneOldest, within: options.withinFile, written,
       elapsedMs: performance.now() - started,
     });
   }

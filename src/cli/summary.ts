@@ -14,6 +14,8 @@ export interface RunSummary {
   readonly model: RotationModel | undefined;
   /** Under equal bins, the row that alone stretches them far back (see loneOldestRow). */
   readonly loneOldest?: LoneOldestRow;
+  /** The fixed region's file, when only occurrences inside it are kept. */
+  readonly within?: string;
   readonly written: readonly string[];
   readonly elapsedMs: number;
   /** Lines a command adds before the files written (the curves' quorum, flags and correlations). */
@@ -32,6 +34,7 @@ export function printSummary(summary: RunSummary): void {
     out.push(`  not in any slice, ${reason}: ${n(count)}`);
   }
   out.push(...placementLines(result, summary.model));
+  if (summary.within !== undefined) out.push(`placed outside the fixed region ${summary.within}, left out of every slice: ${n(result.outsideRegion)}`);
   if (summary.loneOldest !== undefined) out.push(loneOldestLine(summary.loneOldest, result));
   const occupied = result.slices.filter((s) => s.occurrences > 0).length;
   out.push(`slices: ${result.slices.length} (${occupied} with occurrences); occupied cells over all slices: ${n(result.cells.count)}`);

@@ -148,7 +148,8 @@ describe('driftgrid gaps on a made-up table', () => {
     expect(Number(gaps[0].sampled_km2)).toBeCloseTo(north.filter(inside).length * CELL_KM2, 0);
     // coverage takes the same region: the rows outside are not rejects.
     const coverage = join(dir, 'coverage');
-    await runCli('coverage', input, '--within', join(dir, 'region.geojson'), '--bins', 'equal:10', '--grid', `healpix:${NSIDE}`, '--out', coverage, '--quiet');
+    const printed = await runCli('coverage', input, '--within', join(dir, 'region.geojson'), '--bins', 'equal:10', '--grid', `healpix:${NSIDE}`, '--out', coverage);
+    expect(printed.stdout).toContain(`left out of every slice: ${placed.filter((p) => !inside(p)).length}`);
     expect(readFileSync(join(coverage, 'rejects.csv'), 'utf8').trim().split('\n')).toHaveLength(1);
     const slices = readCsv(join(coverage, 'slices.csv'));
     expect(slices.reduce((sum, s) => sum + Number(s.occurrences), 0)).toBe(placed.filter(inside).length);
