@@ -184,6 +184,23 @@ describe('the workbench with the demo scenario', () => {
     expect(JSON.stringify(session.settings)).not.toMatch(/max_ma|min_ma|overlap/);
   });
 
+  test('exports gaps.csv identical to driftgrid gaps for the same settings', async () => {
+    const { page } = opened;
+    await waitReady(page);
+    const settings = JSON.parse(readFileSync(await (await Promise.all([
+      page.waitForEvent('download'), page.locator('dg-export-menu button[data-export="session.json"]').click(),
+    ]))[0].path(), 'utf8')).settings as { bins: string; grid: string };
+    const out = mkdtempSync(join(tmpdir(), 'dg-e2e-gaps-'));
+    const run = await runCli(
+      'gaps', `${DEMO}/occurrences.csv`, '--rotation', `${DEMO}/poles.csv`, '--area', 'occupied', '--bins', settings.bins, '--grid', settings.grid,
+      '--out', out, '--quiet',
+    );
+    expect(run.status, run.stderr).toBe(0);
+    const download = page.waitForEvent('download');
+    await page.locator('dg-export-menu button[data-export="gaps.csv"]').click();
+    expect(readFileSync(await (await download).path(), 'utf8')).toBe(readFileSync(join(out, 'gaps.csv'), 'utf8'));
+  });
+
   test('shows the equal-area map and the curves with drawn content (screenshots kept)', async () => {
     const { page } = opened;
     await page.locator('dg-display-controls select[name="map-view"]').selectOption('equal-earth');
