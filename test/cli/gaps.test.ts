@@ -44,12 +44,12 @@ describe('driftgrid gaps on a made-up table', () => {
   const south = centres.filter(([lat]) => lat < 0);
   const slice2 = [[-35, 10], [-30, 50], [20, -60], [55, 120]];
   const rows = [
-    'taxon,max_ma,min_ma,palaeo_lat,palaeo_lon',
+    'taxon,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon',
     ...north.map(([lat, lon], k) => `T${k % 7},15,15,${lat},${lon}`),
     ...slice2.map(([lat, lon], k) => `U${k},5,5,${lat},${lon}`),
   ];
   const indicators = [
-    'kind,max_ma,min_ma,palaeo_lat,palaeo_lon',
+    'kind,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon',
     'coal,15,15,45,10', 'coal,14,14,47,20', 'evaporite,5,5,15,30', 'evaporite,6,6,-25,30', 'evaporite,30,30,0,0',
   ].join('\n');
   let dir: string;
@@ -125,7 +125,7 @@ describe('driftgrid gaps on a made-up table', () => {
     expect(run.stderr).toBe('');
     for (const name of ['gaps.csv', 'gaps.geojson', 'belts.csv', 'session.json']) expect(readFileSync(join(again, name))).toEqual(readFileSync(join(out, name)));
     const session = JSON.parse(readFileSync(join(out, 'session.json'), 'utf8')) as { formatVersion: number; inputs: Record<string, unknown> };
-    expect(session.formatVersion).toBe(3);
+    expect(session.formatVersion).toBe(4);
     expect(Object.keys(session.inputs)).toEqual(['occurrences', 'indicators']);
   });
 
@@ -172,7 +172,7 @@ describe('driftgrid gaps on a made-up table', () => {
     expect(area.status).toBe(1);
     expect(area.stderr).toContain('bad-area.geojson');
     expect(area.stderr).toContain('feature 1 geometry.type "Point": expected Polygon or MultiPolygon');
-    writeFileSync(join(dir, 'bad-indicators.csv'), 'kind,max_ma,min_ma,palaeo_lat,palaeo_lon\ncoal,15,15,45,10\n,5,5,0,0\n');
+    writeFileSync(join(dir, 'bad-indicators.csv'), 'kind,oldest_ma,youngest_ma,palaeo_lat,palaeo_lon\ncoal,15,15,45,10\n,5,5,0,0\n');
     const sites = await runCli('gaps', input, '--area', 'all', '--indicators', join(dir, 'bad-indicators.csv'), '--out', join(dir, 'y'), '--quiet');
     expect(sites.status).toBe(1);
     expect(sites.stderr).toMatch(/bad-indicators\.csv: 1 row\(s\) cannot be used:\n {2}line 3, kind: /);
@@ -182,20 +182,20 @@ describe('driftgrid gaps on a made-up table', () => {
 });
 
 describe('driftgrid gaps with an area that moves with the plates', () => {
-  it('makes a cell available when its centre is inside the area as reconstruct moves it to the slice', async () => {
-    // Outside reference: d3-geo's geoContains on the polygons `reconstruct` writes for each slice
+  it('makes a cell available when its centre is inside the area as rotate moves it to the slice', async () => {
+    // Outside reference: d3-geo's geoContains on the polygons `rotate` writes for each slice
     // with the same model; the demo's land carries plate_id.
     const dir = tempDir('gaps-plates');
     const nside = 8;
     const demo = (name: string) => join('assets', 'demo', name);
-    const moved = await runCli('reconstruct', demo('land.geojson'), '--rotation', demo('poles.csv'), '--bins', 'stages', '--single-file', '--out', join(dir, 'land'), '--quiet');
+    const moved = await runCli('rotate', demo('land.geojson'), '--rotation', demo('poles.csv'), '--bins', 'stages', '--single-file', '--out', join(dir, 'land'), '--quiet');
     expect(moved.stderr).toBe('');
     const run = await runCli(
       'gaps', demo('occurrences.csv'), '--area', demo('land.geojson'), '--rotation', demo('poles.csv'), '--bins', 'stages', '--grid', `healpix:${nside}`,
       '--out', join(dir, 'gaps'), '--quiet',
     );
     expect(run.stderr).toBe('');
-    const land = JSON.parse(readFileSync(join(dir, 'land', 'land-reconstructed.geojson'), 'utf8')) as FeatureCollection<Polygon | MultiPolygon>;
+    const land = JSON.parse(readFileSync(join(dir, 'land', 'land-rotated.geojson'), 'utf8')) as FeatureCollection<Polygon | MultiPolygon>;
     const cells = new HealpixGrid(nside);
     const centresAt = Array.from({ length: cells.cellCount }, (_, c) => Array.from(cells.cellCentreInto(c, new Float64Array(2))));
     const cellKm2 = (4 * Math.PI * R_KM * R_KM) / cells.cellCount;
