@@ -258,7 +258,7 @@ describe('rotate inputs and options that cannot be used', () => {
     [['rotate', LAND, '--rotation', POLES, '--prefer-model'], /Unknown option '--prefer-model'/],
     [['rotate', 'assets/demo/poles.geojson', '--rotation', POLES], /assets\/demo\/poles\.geojson: cannot read it/],
     [['rotate', 'test/fixtures/bad/empty.csv', '--rotation', POLES], /empty\.csv: line 1, header "": expected a header line naming the columns, then data rows \(the file is empty\)/],
-    [['reconstruct', LAND, '--rotation', POLES], /^driftgrid: Unknown command "reconstruct"\. Commands: coverage, curves, rotate\. See `driftgrid --help`\.\n$/],
+    [['reconstruct', LAND, '--rotation', POLES], /^driftgrid: Unknown command "reconstruct"\. Commands: coverage, curves, gaps, rotate\. See `driftgrid --help`\.\n$/],
   ])('%j is refused with a message saying what was expected', async (args, message) => {
     const run = await runCli(...args, '--out', tempDir('rotate-opt'));
     expect(run.status).toBe(1);
