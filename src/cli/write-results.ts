@@ -1,5 +1,5 @@
 import { createWriteStream } from 'node:fs';
-import { mkdir, realpath, writeFile } from 'node:fs/promises';
+import { mkdir, realpath } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
@@ -18,13 +18,6 @@ export async function prepareTargets(folder: string, names: readonly string[], i
     const real = await realpath(target).catch(() => resolve(target));
     if (protectedPaths.has(real)) throw new Error(`Refusing to write ${target}: it is one of the input files. Choose another --out folder.`);
   }
-  return targets;
-}
-
-/** Writes result files into `folder` (created when missing), never over any of the inputs. */
-export async function writeResults(folder: string, files: Readonly<Record<string, string | Uint8Array>>, inputs: readonly string[]): Promise<string[]> {
-  const targets = await prepareTargets(folder, Object.keys(files), inputs);
-  await Promise.all(Object.values(files).map((text, k) => writeFile(targets[k], text)));
   return targets;
 }
 
