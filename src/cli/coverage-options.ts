@@ -28,7 +28,7 @@ const SESSION_FIXED = [
   'quorum', 'trials', 'rarefy', 'age-trials', 'region-km', 'within',
 ] as const;
 /** Options that only mean something with a rotation model. */
-export const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
+const NEED_ROTATION = ['rotate-at', 'prefer-model', 'beyond-model'] as const;
 
 const COVERAGE_OPTIONS = {
   ...SHARED_OPTIONS,
@@ -50,6 +50,28 @@ const CURVES_OPTIONS = {
 
 type CurvesOptionName = Exclude<keyof typeof CURVES_OPTIONS, keyof typeof COVERAGE_OPTIONS>;
 
+/**
+ * Refuses what no command that reads one occurrence table can take: more than one table, none
+ * (`usage` shows how to give it), settings beside the session that fixes them (`sessionFixed`),
+ * and rotation options without a rotation model.
+ */
+export function checkTableCommand(
+  command: string, usage: string, values: Readonly<Record<string, unknown>>, positionals: readonly string[], sessionFixed: readonly string[],
+): void {
+  if (positionals.length > 1) throw new Error(`${command} takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);
+  if (values.session !== undefined) {
+    const clash = sessionFixed.filter((name) => values[name] !== undefined);
+    if (clash.length > 0 || positionals.length > 0) {
+      throw new Error(`--session fixes the input table and the settings; leave out ${[...clash.map((n) => `--${n}`), ...positionals].join(', ')}.`);
+    }
+  } else if (positionals.length === 0) {
+    throw new Error(`${command} needs an occurrence table: ${usage}. See \`driftgrid --help\`.`);
+  } else if (values.rotation === undefined) {
+    const orphans = NEED_ROTATION.filter((name) => values[name] !== undefined);
+    if (orphans.length > 0) throw new Error(`${orphans.map((n) => `--${n}`).join(', ')} need${orphans.length === 1 ? 's' : ''} a rotation model: add --rotation <poles.csv>.`);
+  }
+}
+
 /** The options of `coverage`, or of `curves` (which also reads the curves settings). */
 export function parseCoverageOptions(args: readonly string[], command: 'coverage' | 'curves' = 'coverage'): CoverageOptions {
   let parsed;
@@ -61,18 +83,7 @@ export function parseCoverageOptions(args: readonly string[], command: 'coverage
   // Both option sets as one shape: the curves options are simply absent for coverage.
   const values: typeof parsed.values & { readonly [name in CurvesOptionName]?: string } = parsed.values;
   const { positionals } = parsed;
-  if (positionals.length > 1) throw new Error(`${command} takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);
-  if (values.session !== undefined) {
-    const clash = SESSION_FIXED.filter((name) => values[name] !== undefined);
-    if (clash.length > 0 || positionals.length > 0) {
-      throw new Error(`--session fixes the input table and the settings; leave out ${[...clash.map((n) => `--${n}`), ...positionals].join(', ')}.`);
-    }
-  } else if (positionals.length === 0) {
-    throw new Error(`${command} needs an occurrence table: driftgrid ${command} <occurrences.csv> [options]. See \`driftgrid --help\`.`);
-  } else if (values.rotation === undefined) {
-    const orphans = NEED_ROTATION.filter((name) => values[name] !== undefined);
-    if (orphans.length > 0) throw new Error(`${orphans.map((n) => `--${n}`).join(', ')} need${orphans.length === 1 ? 's' : ''} a rotation model: add --rotation <poles.csv>.`);
-  }
+  checkTableCommand(command, `driftgrid ${command} <occurrences.csv> [options]`, values, positionals, SESSION_FIXED);
   return {
     input: positionals[0],
     ...settingsFromOptions(values),

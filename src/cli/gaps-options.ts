@@ -1,5 +1,5 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
-import { DEFAULT_OUT, NEED_ROTATION, type CoverageOptions } from './coverage-options';
+import { DEFAULT_OUT, checkTableCommand, type CoverageOptions } from './coverage-options';
 import { settingsFromOptions, SHARED_OPTIONS, usageError } from './option-values';
 
 const GAPS_OPTIONS = {
@@ -27,18 +27,7 @@ export function parseGapsOptions(args: readonly string[]): CoverageOptions {
     throw usageError(error);
   }
   const { values, positionals } = parsed;
-  if (positionals.length > 1) throw new Error(`gaps takes one occurrence table; got ${positionals.length}: ${positionals.join(', ')}.`);
-  if (values.session !== undefined) {
-    const clash = GAPS_SESSION_FIXED.filter((name) => values[name] !== undefined);
-    if (clash.length > 0 || positionals.length > 0) {
-      throw new Error(`--session fixes the input table and the settings; leave out ${[...clash.map((n) => `--${n}`), ...positionals].join(', ')}.`);
-    }
-  } else if (positionals.length === 0) {
-    throw new Error('gaps needs an occurrence table: driftgrid gaps <occurrences.csv> --area <land.geojson|occupied|all> [options]. See `driftgrid --help`.');
-  } else if (values.rotation === undefined) {
-    const orphans = NEED_ROTATION.filter((name) => values[name] !== undefined);
-    if (orphans.length > 0) throw new Error(`${orphans.map((n) => `--${n}`).join(', ')} need${orphans.length === 1 ? 's' : ''} a rotation model: add --rotation <poles.csv>.`);
-  }
+  checkTableCommand('gaps', 'driftgrid gaps <occurrences.csv> --area <land.geojson|occupied|all> [options]', values, positionals, GAPS_SESSION_FIXED);
   return {
     input: positionals[0],
     ...settingsFromOptions(values),
