@@ -1,22 +1,13 @@
 import type { AnalysisResult } from '../analysis';
 import {
-  SESSION_FORMAT, SESSION_FORMAT_VERSION, SESSION_FORMAT_VERSION_GAPS, sessionSummary, type Session, type SessionInput,
+  SESSION_FORMAT, SESSION_FORMAT_VERSION, SESSION_FORMAT_VERSION_GAPS, sessionSummary, type Session, type SessionInputFiles,
 } from '../export/session';
 import { TOOL_VERSION } from '../version';
 import type { RunSettings } from './run-settings';
 import { settingsText } from './settings-text';
 
 /** The input files of a run as the session records them; the front end knows their paths and digests. */
-export interface SessionInputs {
-  readonly occurrences: SessionInput;
-  readonly bins?: SessionInput;
-  readonly rotation?: SessionInput;
-  /** The area polygons of gaps, recorded when settings.area is `file`. */
-  readonly area?: SessionInput;
-  /** The fixed region, recorded when settings.within is true. */
-  readonly within?: SessionInput;
-  readonly indicators?: SessionInput;
-}
+export type SessionInputs = SessionInputFiles;
 
 /** What the reader made of the occurrence table, for the session's summary. */
 export interface ReadCounts {

@@ -5,6 +5,7 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 import { buildWeb, webOut } from '../../scripts/build-web.mjs';
 import { ensureChromium } from '../../scripts/ensure-chromium.mjs';
 import { serve } from '../../scripts/serve.mjs';
@@ -150,4 +151,23 @@ export async function openPage(
     foreignRequests: () => requests.filter((r) => !r.startsWith('blob:') && !r.startsWith('data:') && new URL(r).origin !== origin),
     close: () => context.close(),
   };
+}
+
+/** The built workbench served and one browser launched for a whole test file, both closed after it. */
+export function servedWorkbench(): { readonly app: App; readonly browser: Browser } {
+  const served = {} as { app: App; browser: Browser };
+  beforeAll(async () => {
+    served.app = await startApp();
+    served.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await served.browser?.close();
+    await served.app?.close();
+  });
+  return served;
+}
+
+/** Waits until the page says its current work is done (dg-app's data-state). */
+export async function waitReady(page: Page): Promise<void> {
+  await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });
 }

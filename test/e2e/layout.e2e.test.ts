@@ -3,25 +3,11 @@
 // window with room to use, nothing overflows sideways, and the latitude panel does not move when
 // the chosen cell changes. Also: arrow keys right after an import. Screenshots go to
 // test-artifacts/e2e/layout-<width>x<height>.png.
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { launchBrowser, openPage, saveScreenshot, startApp, type App } from './harness';
+import type { Page } from 'playwright-core';
+import { describe, expect, test } from 'vitest';
+import { openPage, saveScreenshot, servedWorkbench, waitReady } from './harness';
 
-let app: App;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
-
-async function waitReady(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });
-}
+const served = servedWorkbench();
 
 interface Box { left: number; right: number; top: number; bottom: number; width: number; height: number }
 
@@ -42,7 +28,7 @@ async function importLongReject(page: Page): Promise<void> {
 
 describe.each([[1440, 900], [1280, 720], [900, 700]])('at %i×%i', (width, height) => {
   test('the rejects list open and a cell chosen leave the strip, map and curves whole, and the latitude panel still', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await page.setViewportSize({ width, height });
@@ -112,7 +98,7 @@ describe.each([[1440, 900], [1280, 720], [900, 700]])('at %i×%i', (width, heigh
 
 describe.each([[1280, 720], [900, 700]])('the mapping step at %i×%i', (width, height) => {
   test('has the window’s width: every field’s choice and every column of the first rows can be reached', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await page.setViewportSize({ width, height });
@@ -159,7 +145,7 @@ describe.each([[1280, 720], [900, 700]])('the mapping step at %i×%i', (width, h
 
 describe('the WebGL map’s PNG', () => {
   test('is a figure: the slice’s title above the map, the legend and the projection below', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await waitReady(page);
@@ -200,7 +186,7 @@ describe('the keyboard right after an import', () => {
   const name = async (page: Page) => (await page.locator('dg-slice-summary [data-field="name"]').textContent())?.trim() ?? '';
 
   test('an arrow key pressed as soon as the import is done moves the slice', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await waitReady(page);
@@ -219,7 +205,7 @@ describe('the keyboard right after an import', () => {
   // Item 14 of issue 10, not settled: the step is still lost in some runs (it passed in one
   // run of three). Skipped so the suite stays green; unskip when the cause is found.
   test.skip('an arrow key pressed while the imported table is still being analysed counts once it is', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await waitReady(page);

@@ -1,24 +1,13 @@
 // A session file with a setting no run can have is refused by the page in the command line's
 // words (the sentence after the file name is the same; the page names the file, the command line
 // the path it was given).
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { describe, expect, test } from 'vitest';
 import { runCli } from '../cli/run-cli';
-import { launchBrowser, openPage, startApp, type App } from './harness';
+import { openPage, servedWorkbench } from './harness';
 
 const SESSION = 'test/e2e/fixtures/session-rotate-sideways.json';
 const REFUSAL = 'settings.rotateAt "sideways": expected slice or occurrence';
-let app: App;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
+const served = servedWorkbench();
 
 describe('a session file with rotateAt "sideways"', () => {
   test('is refused by the page with the same sentence as by driftgrid coverage --session, and the settings stay', async () => {
@@ -26,7 +15,7 @@ describe('a session file with rotateAt "sideways"', () => {
     expect(cli.status).toBe(1);
     expect(cli.stderr).toBe(`driftgrid: ${SESSION}, ${REFUSAL}\n`);
 
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     try {
       await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });

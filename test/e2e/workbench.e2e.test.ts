@@ -5,23 +5,13 @@
 import { mkdtempSync, readFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
 import { runCli } from '../cli/run-cli';
-import { countDrawnPixels, launchBrowser, openPage, runAxe, saveScreenshot, startApp, waitForCanvasDrawn, type App, type OpenedPage } from './harness';
+import { countDrawnPixels, openPage, runAxe, saveScreenshot, servedWorkbench, waitForCanvasDrawn, waitReady, type OpenedPage } from './harness';
 
 const DEMO = 'assets/demo';
-let app: App;
-let browser: Browser;
-
-beforeAll(async () => {
-  app = await startApp();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.close();
-});
+const served = servedWorkbench();
 
 /** The command line's slices.csv for the demo with the given options (the app loads the demo's poles too). */
 async function cliSlices(...options: string[]): Promise<{ text: string; rows: Map<string, Record<string, string>> }> {
@@ -37,10 +27,6 @@ async function cliSlices(...options: string[]): Promise<{ text: string; rows: Ma
     return [row.name, row] as const;
   }));
   return { text, rows };
-}
-
-async function waitReady(page: Page): Promise<void> {
-  await page.waitForFunction(() => document.querySelector('dg-app')?.getAttribute('data-state') === 'ready', null, { timeout: 60_000 });
 }
 
 async function field(page: Page, name: string): Promise<string> {
@@ -75,7 +61,7 @@ function expectSameSlice(shown: Record<string, string>, row: Record<string, stri
 describe('the workbench with the demo scenario', () => {
   let opened: OpenedPage;
   beforeAll(async () => {
-    opened = await openPage(browser, app.url);
+    opened = await openPage(served.browser, served.app.url);
     await waitReady(opened.page);
   });
   afterAll(() => opened?.close());
@@ -216,7 +202,7 @@ describe('the workbench with the demo scenario', () => {
 
 describe('importing a table', () => {
   test('goes through the mapping step, lists the rejected row, and shows names as text', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     const { page } = opened;
     const dialogs: string[] = [];
     page.on('dialog', (d) => { dialogs.push(d.message()); void d.dismiss(); });
@@ -275,7 +261,7 @@ describe('a browser without WebGL', () => {
         return String(kind).startsWith('webgl') || kind === 'experimental-webgl' ? null : original.call(this, kind, ...rest);
       };
     })();`;
-    const opened = await openPage(browser, app.url, { initScript: noWebgl });
+    const opened = await openPage(served.browser, served.app.url, { initScript: noWebgl });
     try {
       await waitReady(opened.page);
       const { page } = opened;
@@ -294,7 +280,7 @@ describe('a browser without WebGL', () => {
 
 describe('the page address', () => {
   test('reopens the view it holds: settings, slice and map', async () => {
-    const opened = await openPage(browser, `${app.url}#bins=stages&grid=healpix%3A16&measure=taxa&slice=Campanian&map=polar-south`);
+    const opened = await openPage(served.browser, `${served.app.url}#bins=stages&grid=healpix%3A16&measure=taxa&slice=Campanian&map=polar-south`);
     try {
       const { page } = opened;
       await waitReady(page);
@@ -311,7 +297,7 @@ describe('the page address', () => {
 
 describe('dropping a file on the page', () => {
   test('starts the import with the mapping step', async () => {
-    const opened = await openPage(browser, app.url);
+    const opened = await openPage(served.browser, served.app.url);
     try {
       const { page } = opened;
       await waitReady(page);
